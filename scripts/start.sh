@@ -1,0 +1,51 @@
+#!/usr/bin/env bash
+# Starts Ringdown with its embedded defaults: PostgreSQL and Redis on loopback with data in .data/,
+# migrations, demo data, a production build, the server and the worker. Ctrl-C stops everything.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/packages.sh
+source scripts/lib/services.sh
+
+export RINGDOWN_DATA_DIR="${RINGDOWN_DATA_DIR:-$PWD/.data}"
+export PG_PORT="${PG_PORT:-55432}" REDIS_PORT="${REDIS_PORT:-56379}" PORT="${PORT:-3000}"
+export REDIS_PERSIST=yes NODE_ENV=production
+export STORAGE_DIR="${STORAGE_DIR:-$RINGDOWN_DATA_DIR/files}"
+mkdir -p "$RINGDOWN_DATA_DIR" "$STORAGE_DIR"
+if [ ! -s "$RINGDOWN_DATA_DIR/session-secret" ]; then
+  (umask 077; head -c 32 /dev/urandom | base64 > "$RINGDOWN_DATA_DIR/session-secret")
+fi
+export SESSION_SECRET="${SESSION_SECRET:-$(cat "$RINGDOWN_DATA_DIR/session-secret")}"
+
+children=()
+shutdown() {
+  trap - INT TERM EXIT
+  echo; echo "ringdown: stopping"
+  for pid in "${children[@]}"; do kill -TERM "$pid" 2>/dev/null || true; done
+  for pid in "${children[@]}"; do wait "$pid" 2>/dev/null || true; done
+  stop_services
+}
+trap shutdown INT TERM EXIT
+
+ensure_server_packages
+ensure_node_modules
+start_postgres
+start_redis
+npm run --silent migrate
+npm run --silent seed
+echo "ringdown: building the client"
+npm run --silent build >/dev/null
+
+npx tsx server/index.ts & children+=($!)
+npx tsx worker/index.ts & children+=($!)
+
+cat <<MSG
+
+  Ringdown is running at http://127.0.0.1:${PORT}/
+  Demo sign-ins (password ringdown-demo):
+    owner@ringdown.test     owner of the demo consultancy
+    engineer@ringdown.test  engineer
+    client@ringdown.test    client (sees the shared demo room)
+  Press Ctrl-C to stop. Data stays in ${RINGDOWN_DATA_DIR}.
+
+MSG
+wait -n "${children[@]}" || true

@@ -1,0 +1,34 @@
+#!/usr/bin/env bash
+# Runs the whole test suite the way CI does: its own throw-away PostgreSQL and Redis on other
+# ports with data in a temporary folder, then type check, unit, API and browser tests.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/packages.sh
+source scripts/lib/services.sh
+
+ensure_server_packages
+ensure_browser_packages
+ensure_node_modules
+
+# /tmp is reachable by the postgres user wherever the checkout lives.
+export RINGDOWN_DATA_DIR="$(mktemp -d /tmp/ringdown-test.XXXXXX)"
+chmod 755 "$RINGDOWN_DATA_DIR"
+export PG_PORT="${TEST_PG_PORT:-55433}" REDIS_PORT="${TEST_REDIS_PORT:-56380}" REDIS_PERSIST=no
+export STORAGE_DIR="$RINGDOWN_DATA_DIR/files" NODE_ENV=test SESSION_SECRET="test-secret-$RANDOM$RANDOM"
+unset DATABASE_URL REDIS_URL
+cleanup() { stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
+trap cleanup EXIT
+start_postgres
+start_redis
+
+echo "ringdown: type check"
+npm run --silent typecheck
+echo "ringdown: unit tests"
+npx vitest run --project unit
+echo "ringdown: API tests (PostgreSQL + Redis)"
+npx vitest run --project api
+echo "ringdown: building the client for the browser tests"
+npm run --silent build >/dev/null
+echo "ringdown: browser tests (Chromium)"
+npx vitest run --project browser
+echo "ringdown: all suites passed"

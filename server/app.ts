@@ -1,0 +1,106 @@
+import express, { type Express } from 'express'
+import session from 'express-session'
+import connectPgSimple from 'connect-pg-simple'
+import helmet from 'helmet'
+import { pinoHttp } from 'pino-http'
+import pg from 'pg'
+import { csrfSync } from 'csrf-sync'
+import { existsSync } from 'node:fs'
+import path from 'node:path'
+import type { Sequelize } from 'sequelize'
+import type { Redis } from 'ioredis'
+import type { AppConfig } from './config'
+import { logger } from './logger'
+import { configurePassport } from './auth/configurePassport'
+import { authRouter } from './routes/authRouter'
+import { workspacesRouter } from './routes/workspacesRouter'
+import { roomsRouter } from './routes/roomsRouter'
+import { surveysRouter } from './routes/surveysRouter'
+import { errorHandler, notFoundHandler } from './middleware/errorHandler'
+import { checkHealth } from './services/healthService'
+import { initModels } from './models'
+
+export interface AppDependencies {
+  config: AppConfig
+  sequelize: Sequelize
+  redis: Redis
+  /** Folder with the built client; served with an SPA fallback when it exists. */
+  clientDir?: string
+}
+
+export const APP_VERSION = '0.1.0'
+
+export interface RingdownApp {
+  app: Express
+  /** Closes what the app itself opened (the session store's pool). */
+  close: () => Promise<void>
+}
+
+export function createApp({ config, sequelize, redis, clientDir = path.resolve('dist') }: AppDependencies): RingdownApp {
+  initModels(sequelize)
+  const app = express()
+  const isSecure = config.SECURE_COOKIES === '1'
+  if (config.TRUST_PROXY === '1') app.set('trust proxy', 1)
+  app.disable('x-powered-by')
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Vuetify writes its theme into a <style> element at run time.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+          'media-src': ["'self'", 'blob:'],
+          'upgrade-insecure-requests': isSecure ? [] : null,
+        },
+      },
+    }),
+  )
+  if (config.NODE_ENV !== 'test') app.use(
+      pinoHttp({
+        logger,
+        autoLogging: { ignore: (req) => req.url === '/api/health' },
+        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
+      }),
+    )
+  app.use(express.json({ limit: '1mb' }))
+
+  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 })
+  const PgStore = connectPgSimple(session)
+  app.use(
+    session({
+      name: 'ringdown.sid',
+      secret: config.SESSION_SECRET,
+      store: new PgStore({ pool: sessionPool, tableName: 'sessions', createTableIfMissing: false }),
+      resave: false,
+      saveUninitialized: false,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: isSecure, maxAge: 14 * 24 * 3600 * 1000 },
+    }),
+  )
+  const passport = configurePassport()
+  app.use(passport.session())
+  const { csrfSynchronisedProtection, generateToken } = csrfSync({
+    getTokenFromRequest: (req) => req.headers['x-csrf-token'] as string | undefined,
+  })
+
+  app.get('/api/health', async (_req, res) => {
+    const health = await checkHealth(sequelize, redis, APP_VERSION)
+    res.status(health.status === 'ok' ? 200 : 503).json(health)
+  })
+  app.use('/api', csrfSynchronisedProtection)
+  app.use(
+    '/api/auth',
+    authRouter({ sequelize, signInLimitPerWindow: config.SIGN_IN_RATE_LIMIT, generateCsrfToken: (req) => generateToken(req as express.Request) }),
+  )
+  app.use('/api/workspaces', workspacesRouter())
+  app.use('/api/rooms', roomsRouter())
+  app.use('/api/surveys', surveysRouter())
+  app.use('/api', notFoundHandler)
+
+  if (existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
+  }
+  app.use(errorHandler)
+  return { app, close: () => sessionPool.end() }
+}

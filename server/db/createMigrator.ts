@@ -1,0 +1,25 @@
+import { Umzug, SequelizeStorage } from 'umzug'
+import type { Sequelize } from 'sequelize'
+import * as initial from '../migrations/0001-initial'
+import * as analyses from '../migrations/0002-analyses'
+
+/**
+ * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
+ * ordered set whether they run from TypeScript sources or a bundle.
+ */
+const MIGRATIONS = [
+  { name: '0001-initial', module: initial },
+  { name: '0002-analyses', module: analyses },
+]
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS.map(({ name, module }) => ({
+      name,
+      up: () => module.up(sequelize.getQueryInterface()),
+      down: () => module.down(sequelize.getQueryInterface()),
+    })),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  })
+}

@@ -1,0 +1,29 @@
+import { Redis } from 'ioredis'
+import { loadConfig } from './config'
+import { createSequelize } from './db/createSequelize'
+import { createApp } from './app'
+import { logger } from './logger'
+
+// The only file that listens. Stops accepting connections on SIGTERM/SIGINT, then closes pools.
+const config = loadConfig()
+const sequelize = createSequelize(config.DATABASE_URL)
+const redis = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null, lazyConnect: false })
+redis.on('error', (error) => logger.warn({ err: error }, 'redis connection problem'))
+const { app, close } = createApp({ config, sequelize, redis })
+
+const server = app.listen(config.PORT, config.HOST, () => {
+  logger.info(`Ringdown server listening on http://${config.HOST}:${config.PORT}/`)
+})
+
+let isStopping = false
+async function shutdown(signal: string) {
+  if (isStopping) return
+  isStopping = true
+  logger.info({ signal }, 'shutting down')
+  server.close()
+  server.closeAllConnections()
+  await Promise.allSettled([close(), sequelize.close(), redis.quit()])
+  process.exit(0)
+}
+process.on('SIGTERM', () => void shutdown('SIGTERM'))
+process.on('SIGINT', () => void shutdown('SIGINT'))

@@ -1,0 +1,31 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+
+export class Survey extends Model<InferAttributes<Survey>, InferCreationAttributes<Survey>> {
+  declare id: CreationOptional<number>
+  declare roomId: number
+  declare name: string
+  /** ISO date (YYYY-MM-DD). */
+  declare measuredOn: string
+  declare temperatureC: number | null
+  declare humidityPercent: number | null
+  declare treatmentDescription: CreationOptional<string>
+  declare createdAt: CreationOptional<Date>
+  declare updatedAt: CreationOptional<Date>
+
+  static initModel(sequelize: Sequelize) {
+    Survey.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        roomId: { type: DataTypes.INTEGER, allowNull: false },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        measuredOn: { type: DataTypes.DATEONLY, allowNull: false },
+        temperatureC: { type: DataTypes.DOUBLE, allowNull: true },
+        humidityPercent: { type: DataTypes.DOUBLE, allowNull: true },
+        treatmentDescription: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'surveys' },
+    )
+  }
+}

@@ -1,0 +1,18 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import * as surveys from '../controllers/surveysController'
+import { validate } from '../middleware/validate'
+import { requireAuth } from '../middleware/requireAuth'
+import { idParam } from '../../shared/api/common'
+import { updateSurveyBodySchema } from '../../shared/api/surveys'
+
+const surveyParams = z.object({ surveyId: idParam })
+
+export function surveysRouter() {
+  const router = Router()
+  router.use(requireAuth)
+  router.get('/:surveyId', validate({ params: surveyParams }), surveys.show)
+  router.patch('/:surveyId', validate({ params: surveyParams, body: updateSurveyBodySchema }), surveys.update)
+  router.delete('/:surveyId', validate({ params: surveyParams }), surveys.remove)
+  return router
+}

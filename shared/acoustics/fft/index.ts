@@ -1,0 +1,7 @@
+export { nextPowerOfTwo, isPowerOfTwo } from './nextPowerOfTwo'
+export { getRealFftPlan, type RealFftPlan } from './realFftPlan'
+export { createRealSpectrum, type RealSpectrum } from './realSpectrum'
+export { forwardRealFft, type ForwardRealFftOptions } from './forwardRealFft'
+export { inverseRealFft, type InverseRealFftOptions } from './inverseRealFft'
+export { fftConvolve, fftCorrelate, multiplySpectraInPlace } from './fftConvolve'
+export { hilbertTransform } from './hilbertTransform'

@@ -1,0 +1,11 @@
+import { readWavHeader, type WavFacts } from './readWavHeader'
+
+/**
+ * Header facts of a WAV (rate, bits, channels, frames, format, duration) without decoding samples;
+ * cheap enough to validate an upload before accepting it.
+ * @throws WavDecodeError for a file {@link decodeWav} would reject on its header alone
+ */
+export function readWavFacts(bytes: Uint8Array): WavFacts {
+  const { sampleRateHz, bitDepth, channelCount, frameCount, format, durationS } = readWavHeader(bytes)
+  return { sampleRateHz, bitDepth, channelCount, frameCount, format, durationS }
+}

@@ -1,0 +1,6 @@
+export interface HealthResponse {
+  status: 'ok' | 'degraded'
+  database: 'ok' | 'unreachable'
+  redis: 'ok' | 'unreachable'
+  version: string
+}

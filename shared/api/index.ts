@@ -1,0 +1,6 @@
+export * from './common'
+export * from './auth'
+export * from './members'
+export * from './rooms'
+export * from './surveys'
+export * from './health'

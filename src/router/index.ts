@@ -1,0 +1,37 @@
+import { createRouter, createWebHistory, type RouteLocationNormalized } from 'vue-router'
+import type { Role } from '@shared/api'
+import { authGuard } from './authGuard'
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** guest: only signed-out visitors; member (default): only signed-in users; any: everyone. */
+    access?: 'guest' | 'member' | 'any'
+    /** Roles in the current workspace that may open the page. */
+    roles?: readonly Role[]
+    title?: string
+  }
+}
+
+const ROOM_MANAGERS: readonly Role[] = ['owner', 'engineer']
+const roomIdProp = (route: RouteLocationNormalized) => ({ roomId: Number(route.params.roomId) })
+
+export const router = createRouter({
+  history: createWebHistory(import.meta.env.BASE_URL),
+  routes: [
+    { path: '/', redirect: '/rooms' },
+    { path: '/sign-in', name: 'sign-in', component: () => import('@/views/SignInView.vue'), meta: { access: 'guest', title: 'Sign in' } },
+    { path: '/register', name: 'register', component: () => import('@/views/RegisterView.vue'), meta: { access: 'guest', title: 'Create an account' } },
+    { path: '/rooms', name: 'rooms', component: () => import('@/views/RoomsView.vue'), meta: { title: 'Rooms' } },
+    { path: '/rooms/new', name: 'room-new', component: () => import('@/views/RoomFormView.vue'), meta: { roles: ROOM_MANAGERS, title: 'New room' } },
+    { path: '/rooms/:roomId(\\d+)', name: 'room', component: () => import('@/views/RoomView.vue'), props: roomIdProp, meta: { title: 'Room' } },
+    { path: '/rooms/:roomId(\\d+)/edit', name: 'room-edit', component: () => import('@/views/RoomFormView.vue'), props: roomIdProp, meta: { title: 'Edit room' } },
+    { path: '/workspace/members', name: 'members', component: () => import('@/views/MembersView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Members' } },
+    { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { access: 'any', title: 'Page not found' } },
+  ],
+  scrollBehavior: (_to, _from, saved) => saved ?? { top: 0 },
+})
+
+router.beforeEach(authGuard)
+router.afterEach((to) => {
+  document.title = to.meta.title ? `${to.meta.title} · Ringdown` : 'Ringdown'
+})

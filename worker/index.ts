@@ -1,0 +1,33 @@
+import { Worker } from 'bullmq'
+import { Redis } from 'ioredis'
+import { loadConfig } from '../server/config'
+import { createSequelize } from '../server/db/createSequelize'
+import { initModels } from '../server/models'
+import { logger } from '../server/logger'
+import { ANALYSIS_QUEUE_NAME, type AnalysisJobPayload } from '../shared/jobs/analysisJob'
+import { processAnalysisJob } from './processAnalysisJob'
+
+// `npm run worker`: consumes the analysis queue. Safe to run many times against one Redis and one
+// PostgreSQL; on SIGTERM it finishes the job in hand, then exits.
+const config = loadConfig()
+const sequelize = createSequelize(config.DATABASE_URL)
+initModels(sequelize)
+const connection = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null })
+
+const worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir: config.STORAGE_DIR }), {
+  connection,
+  concurrency: 1,
+})
+worker.on('ready', () => logger.info({ queue: ANALYSIS_QUEUE_NAME }, 'worker ready'))
+worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data.captureId }, 'analysis done'))
+worker.on('failed', (job, error) => logger.warn({ jobId: job?.id, err: error }, 'analysis failed'))
+worker.on('error', (error) => logger.error({ err: error }, 'worker error'))
+
+async function shutdown(signal: string) {
+  logger.info({ signal }, 'worker stopping after the job in hand')
+  await worker.close()
+  await Promise.allSettled([connection.quit(), sequelize.close()])
+  process.exit(0)
+}
+process.on('SIGTERM', () => void shutdown('SIGTERM'))
+process.on('SIGINT', () => void shutdown('SIGINT'))
