@@ -1,5 +1,5 @@
 import { Router } from 'express'
-import { rateLimit } from 'express-rate-limit'
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit'
 import type { Sequelize } from 'sequelize'
 import * as auth from '../controllers/authController'
 import { validate } from '../middleware/validate'
@@ -15,7 +15,7 @@ export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow
     limit: options.signInLimitPerWindow,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (req) => `${req.ip}:${String((req.body as { email?: unknown })?.email ?? '').toLowerCase()}`,
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}:${String((req.body as { email?: unknown })?.email ?? '').toLowerCase()}`,
     handler: (_req, _res, next) =>
       next(new HttpError(429, 'rate-limited', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
   })

@@ -7,7 +7,7 @@ const HANDBOOK_ROOM = { lengthM: 16, widthM: 12, heightM: 8 }
 
 describe('findModeCoincidences', () => {
   it('returns the handbook coincidences at 70.6 Hz and 141.25 Hz among axial modes', () => {
-    const axial = roomModes(HANDBOOK_ROOM, { speedOfSoundMps: 1130, maxHz: 220 }).filter((m) => m.type === 'axial')
+    const axial = roomModes(HANDBOOK_ROOM, { speedOfSoundMps: 1130, maxHz: 200 }).filter((m) => m.type === 'axial')
     const groups = findModeCoincidences(axial)
     // Handbook for Sound Engineers Table 6-4: (2,0,0)/(0,0,1) at 70.6 Hz, (4,0,0)/(0,3,0)/(0,0,2) at 141.25 Hz
     expect(groups).toHaveLength(2)
@@ -15,6 +15,14 @@ describe('findModeCoincidences', () => {
     expect(groups[0]!.modes.map((m) => m.indices.join(',')).sort()).toEqual(['0,0,1', '2,0,0'])
     expectWithin(groups[1]!.frequencyHz, 141.25, 0.005)
     expect(groups[1]!.modes.map((m) => m.indices.join(',')).sort()).toEqual(['0,0,2', '0,3,0', '4,0,0'])
+  })
+
+  it('returns the next coincidence at 211.88 Hz when the range is extended', () => {
+    // Handbook Table 6-4 height series 211.88 Hz = (0,0,3); (6,0,0) = 6·35.3125 Hz (Rayleigh, computed)
+    const axial = roomModes(HANDBOOK_ROOM, { speedOfSoundMps: 1130, maxHz: 220 }).filter((m) => m.type === 'axial')
+    const last = findModeCoincidences(axial).at(-1)!
+    expectWithin(last.frequencyHz, 211.88, 0.01)
+    expect(last.modes.map((m) => m.indices.join(',')).sort()).toEqual(['0,0,3', '6,0,0'])
   })
 
   it('groups near-coincident modes when given a tolerance in percent', () => {
