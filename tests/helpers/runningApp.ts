@@ -1,0 +1,38 @@
+import type { AddressInfo } from 'node:net'
+import type { Server } from 'node:http'
+import { existsSync } from 'node:fs'
+import path from 'node:path'
+import { createApp } from '../../server/app'
+import { seedDemoData } from '../../server/db/demoData'
+import { startTestServices, type TestServices } from './testServices'
+
+export interface RunningApp {
+  baseUrl: string
+  services: TestServices
+  stop: () => Promise<void>
+}
+
+/** The built client served by a real server on a free loopback port, with the demo data seeded. */
+export async function startRunningApp(): Promise<RunningApp> {
+  const clientDir = path.resolve('dist')
+  if (!existsSync(path.join(clientDir, 'index.html'))) {
+    throw new Error('Browser tests need the built client: run `npm run build` first (npm run test:all does).')
+  }
+  const services = await startTestServices()
+  await seedDemoData(services.sequelize)
+  const ringdown = createApp({ ...services, clientDir })
+  const server: Server = await new Promise((resolve) => {
+    const listening = ringdown.app.listen(0, '127.0.0.1', () => resolve(listening))
+  })
+  const { port } = server.address() as AddressInfo
+  return {
+    baseUrl: `http://127.0.0.1:${port}`,
+    services,
+    stop: async () => {
+      server.closeAllConnections()
+      await new Promise<void>((resolve) => server.close(() => resolve()))
+      await ringdown.close()
+      await services.close()
+    },
+  }
+}
