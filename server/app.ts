@@ -16,6 +16,8 @@ import { authRouter } from './routes/authRouter'
 import { workspacesRouter } from './routes/workspacesRouter'
 import { roomsRouter } from './routes/roomsRouter'
 import { surveysRouter } from './routes/surveysRouter'
+import { capturesRouter } from './routes/capturesRouter'
+import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
 import { errorHandler, notFoundHandler } from './middleware/errorHandler'
 import { checkHealth } from './services/healthService'
 import { initModels } from './models'
@@ -26,17 +28,20 @@ export interface AppDependencies {
   redis: Redis
   /** Folder with the built client; served with an SPA fallback when it exists. */
   clientDir?: string
+  /** Defaults to a BullMQ queue on `redis`. */
+  queue?: AnalysisQueue
 }
 
 export const APP_VERSION = '0.1.0'
 
 export interface RingdownApp {
   app: Express
-  /** Closes what the app itself opened (the session store's pool). */
+  queue: AnalysisQueue
+  /** Closes what the app itself opened (the session store's pool, the queue). */
   close: () => Promise<void>
 }
 
-export function createApp({ config, sequelize, redis, clientDir = path.resolve('dist') }: AppDependencies): RingdownApp {
+export function createApp({ config, sequelize, redis, clientDir = path.resolve('dist'), queue = createAnalysisQueue(redis) }: AppDependencies): RingdownApp {
   initModels(sequelize)
   const app = express()
   const isSecure = config.SECURE_COOKIES === '1'
@@ -94,6 +99,7 @@ export function createApp({ config, sequelize, redis, clientDir = path.resolve('
   )
   app.use('/api/workspaces', workspacesRouter())
   app.use('/api/rooms', roomsRouter())
+  app.use('/api', capturesRouter({ storageDir: config.STORAGE_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB, queue }))
   app.use('/api/surveys', surveysRouter())
   app.use('/api', notFoundHandler)
 
@@ -102,5 +108,5 @@ export function createApp({ config, sequelize, redis, clientDir = path.resolve('
     app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
   }
   app.use(errorHandler)
-  return { app, close: () => sessionPool.end() }
+  return { app, queue, close: async () => { await Promise.allSettled([sessionPool.end(), queue.close()]) } }
 }

@@ -12,6 +12,8 @@ const envSchema = z.object({
   /** Set when the app is served over TLS (directly or behind a proxy): cookies become Secure. */
   TRUST_PROXY: z.enum(['0', '1']).default('0'),
   SECURE_COOKIES: z.enum(['0', '1']).default('0'),
+  /** Largest accepted upload, MB. */
+  UPLOAD_LIMIT_MB: z.coerce.number().positive().default(250),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })

@@ -3,13 +3,20 @@ import { loadConfig } from './config'
 import { createSequelize } from './db/createSequelize'
 import { createApp } from './app'
 import { logger } from './logger'
+import { requeueUploadedCaptures } from './services/capturesService'
 
 // The only file that listens. Stops accepting connections on SIGTERM/SIGINT, then closes pools.
 const config = loadConfig()
 const sequelize = createSequelize(config.DATABASE_URL)
 const redis = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null, lazyConnect: false })
 redis.on('error', (error) => logger.warn({ err: error }, 'redis connection problem'))
-const { app, close } = createApp({ config, sequelize, redis })
+const { app, queue, close } = createApp({ config, sequelize, redis })
+
+// Captures accepted while Redis was down stay `uploaded`; queue them once it answers again.
+const REQUEUE_INTERVAL_MS = 10_000
+const requeueTimer = setInterval(() => {
+  requeueUploadedCaptures(queue).catch((error: unknown) => logger.warn({ err: error }, 'requeue pass failed'))
+}, REQUEUE_INTERVAL_MS)
 
 const server = app.listen(config.PORT, config.HOST, () => {
   logger.info(`Ringdown server listening on http://${config.HOST}:${config.PORT}/`)
@@ -20,6 +27,7 @@ async function shutdown(signal: string) {
   if (isStopping) return
   isStopping = true
   logger.info({ signal }, 'shutting down')
+  clearInterval(requeueTimer)
   server.close()
   server.closeAllConnections()
   await Promise.allSettled([close(), sequelize.close(), redis.quit()])

@@ -12,7 +12,11 @@ interface ErrorWithStatus {
 }
 
 /** Errors raised by middleware we use (body-parser, csrf-sync, multer) that carry a 4xx status. */
-function fromLibraryError(error: ErrorWithStatus): HttpError | null {
+function fromLibraryError(error: ErrorWithStatus & { name?: string; field?: string }): HttpError | null {
+  if (error.name === 'MulterError') {
+    if (error.code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'too-large', 'The file is larger than the upload limit. Trim the silence at its end or export a shorter file.')
+    return new HttpError(400, 'bad-upload', `The upload was not accepted (${error.message}). Send one WAV as "file" and optionally one as "reference".`)
+  }
   if (error.code === 'EBADCSRFTOKEN') {
     return new HttpError(403, 'csrf', 'Your session token is missing or out of date. Reload the page and try again.')
   }

@@ -65,12 +65,12 @@ export function synthesizeRoomImpulse(options: SynthesizeRoomImpulseOptions): Fl
   const bandSpectrum = createRealSpectrum(size)
   const bandSignal = new Float64Array(size)
   const response = new Float64Array(sampleCount)
-  const centresHz = bandDecays.map((band) => band.centreHz)
-  const gains = new Float64Array(bandDecays.length)
-  const binHz = sampleRateHz / size
+  const binCount = bandSpectrum.re.length
+  const gainTable = bandSplitGains(bandDecays.map((band) => band.centreHz), sampleRateHz / size, binCount)
   bandDecays.forEach((band, b) => {
-    for (let k = 0; k < bandSpectrum.re.length; k++) {
-      const gain = bandSplitGains(centresHz, k * binHz, gains)[b] as number
+    const gains = gainTable[b] as Float64Array
+    for (let k = 0; k < binCount; k++) {
+      const gain = gains[k] as number
       bandSpectrum.re[k] = gain * (carrierSpectrum.re[k] as number)
       bandSpectrum.im[k] = gain * (carrierSpectrum.im[k] as number)
     }

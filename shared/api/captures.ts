@@ -1,0 +1,67 @@
+import { z } from 'zod'
+import type { CaptureStatus } from '../jobs/analysisJob'
+import type { AnalysisResult, CaptureKind } from '../types/analysis'
+
+/** Multipart form fields arrive as strings: numbers are coerced, blanks become null. */
+const optionalNumber = (label: string, min: number, max: number) =>
+  z.preprocess(
+    (value) => (value === '' || value === undefined || value === null ? null : value),
+    z.coerce.number({ error: `${label} must be a number.` }).min(min, `${label} must be at least ${min}.`).max(max, `${label} must be at most ${max}.`).nullable(),
+  )
+
+export const createCaptureFieldsSchema = z
+  .object({
+    kind: z.enum(['impulse', 'sweep'], { error: 'Say whether the file is an impulse response or a sweep recording.' }),
+    channel: z.coerce.number().int('Channel must be a whole number.').min(0, 'Channels are numbered from 0.').max(63).default(0),
+    sourceLabel: z.string().trim().max(120).default(''),
+    receiverLabel: z.string().trim().max(120).default(''),
+    positionXM: optionalNumber('Position x', -200, 200).default(null),
+    positionYM: optionalNumber('Position y', -200, 200).default(null),
+    positionZM: optionalNumber('Position z', -200, 200).default(null),
+    sweepF1Hz: optionalNumber('Sweep start frequency', 1, 96_000).default(null),
+    sweepF2Hz: optionalNumber('Sweep end frequency', 1, 96_000).default(null),
+    sweepDurationS: optionalNumber('Sweep duration', 0.1, 600).default(null),
+  })
+  .superRefine((fields, ctx) => {
+    if (fields.kind !== 'sweep') return
+    if (fields.sweepF1Hz !== null && fields.sweepF2Hz !== null && fields.sweepF1Hz >= fields.sweepF2Hz) {
+      ctx.addIssue({ code: 'custom', path: ['sweepF2Hz'], message: 'The sweep must end above its start frequency.' })
+    }
+  })
+export type CreateCaptureFields = z.infer<typeof createCaptureFieldsSchema>
+
+export interface CaptureDto {
+  id: number
+  surveyId: number
+  kind: CaptureKind
+  channel: number
+  sourceLabel: string
+  receiverLabel: string
+  positionXM: number | null
+  positionYM: number | null
+  positionZM: number | null
+  sweepF1Hz: number | null
+  sweepF2Hz: number | null
+  sweepDurationS: number | null
+  hasReferenceSweep: boolean
+  originalName: string
+  sha256: string
+  byteSize: number
+  sampleRateHz: number
+  bitDepth: number
+  channelCount: number
+  durationS: number
+  status: CaptureStatus
+  statusMessage: string | null
+  createdAt: string
+  updatedAt: string
+}
+
+export interface AnalysisDto {
+  id: number
+  captureId: number
+  settingsKey: string
+  engineVersion: string
+  createdAt: string
+  result: AnalysisResult
+}
