@@ -2,7 +2,8 @@ import type { BandResolution, BandResult, DecayCurve } from '../types/analysis'
 import { fractionalOctaveBands } from './bands/fractionalOctaveBands'
 import { analyseDecay } from './decay/analyseDecay'
 import { applySos } from './filters/applySos'
-import { designBandFilter } from './filters/designBandFilter'
+import { decimateByTwo } from './filters/decimateByTwo'
+import { designBandFilterBank } from './filters/designBandFilterBank'
 
 export interface AnalyseBandDecaysOptions {
   sampleRateHz: number
@@ -11,30 +12,42 @@ export interface AnalyseBandDecaysOptions {
   isTimeReversed: boolean
 }
 
-/** Samples kept before the onset when filtering forward, so the rise of the direct sound is whole. */
+/** Samples kept before the onset, so the rise of the direct sound and the decimators' reach are whole. */
 const PRE_ONSET_S = 0.005
 
 /**
  * Per-band decay analysis: each IEC 61260-1 band (all that fit below 0.45·fs) is filtered with its
- * Butterworth band-pass (forward, or time-reversed per ISO 3382-2 7.3 NOTE), then analysed from the
- * broadband onset (ISO 3382-1 A.3.4: t = 0 from the broadband response, not per band).
- * Three work buffers are allocated once and reused for every band.
+ * Butterworth band-pass (forward, or time-reversed per ISO 3382-2 7.3 NOTE) — low bands after
+ * zero-phase decimation (designBandFilterBank) — and analysed from the broadband onset
+ * (ISO 3382-1 A.3.4: t = 0 from the broadband response, not per band). The pre-onset margin is a
+ * multiple of the largest decimation factor, so the onset falls on a whole sample at every rate.
+ * Work buffers are allocated once and reused for every band.
  */
 export function analyseBandDecays(impulse: Float64Array, options: AnalyseBandDecaysOptions): { bands: BandResult[]; decays: DecayCurve[] } {
   const { sampleRateHz, onsetSample, isTimeReversed } = options
   const bandsPerOctave = options.bands === 'octave' ? 1 : 3
-  const startSample = Math.max(0, onsetSample - Math.round(PRE_ONSET_S * sampleRateHz))
-  const input = impulse.subarray(startSample)
-  const skip = onsetSample - startSample
-  const filtered = new Float64Array(input.length)
-  const workspace = { energy: new Float64Array(input.length - skip), suffix: new Float64Array(input.length - skip + 1) }
+  const bank = designBandFilterBank(fractionalOctaveBands({ bandsPerOctave, sampleRateHz }), bandsPerOctave, sampleRateHz)
+  const step = bank.maxDecimationFactor
+  const skip = step * Math.floor(Math.min(onsetSample, Math.round(PRE_ONSET_S * sampleRateHz)) / step)
+  const levels = new Map<number, Float64Array>([[1, impulse.subarray(onsetSample - skip)]])
+  const levelFor = (factor: number): Float64Array => {
+    const cached = levels.get(factor)
+    if (cached) return cached
+    const decimated = decimateByTwo(levelFor(factor / 2), bank.halfBandTaps)
+    levels.set(factor, decimated)
+    return decimated
+  }
+  const fullLength = impulse.length - onsetSample + skip
+  const filtered = new Float64Array(fullLength)
+  const workspace = { energy: new Float64Array(fullLength), suffix: new Float64Array(fullLength + 1) }
   const bands: BandResult[] = []
   const decays: DecayCurve[] = []
-  for (const band of fractionalOctaveBands({ bandsPerOctave, sampleRateHz })) {
-    const { filter } = designBandFilter(band, bandsPerOctave, sampleRateHz)
-    applySos(filter, input, { timeReversed: isTimeReversed, output: filtered })
-    const { parameters, curve } = analyseDecay(filtered.subarray(skip), {
-      sampleRateHz,
+  for (const entry of bank.bands) {
+    const input = levelFor(entry.decimationFactor)
+    const output = applySos(entry.filter, input, { timeReversed: isTimeReversed, output: filtered })
+    const { band } = entry
+    const { parameters, curve } = analyseDecay(output.subarray(skip / entry.decimationFactor), {
+      sampleRateHz: entry.sampleRateHz,
       centreHz: band.nominalHz,
       exactCentreHz: band.exactCentreHz,
       bandwidthHz: band.bandwidthHz,

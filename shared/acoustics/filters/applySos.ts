@@ -1,4 +1,5 @@
 import type { SosCascade } from './sosCascade'
+import { filterThreeSections, filterFourSections } from './fusedCascade'
 
 /** States below this are flushed to zero so decays into exact silence never reach denormals. */
 const DENORMAL_GUARD = 1e-150
@@ -7,9 +8,9 @@ const GUARD_BLOCK = 1024
 /**
  * Filters `buffer` in place through every section, transposed direct form II:
  * y = b0·x + s1; s1 = b1·x − a1·y + s2; s2 = b2·x − a2·y. Zero initial state.
- * One pass per section keeps six numbers in registers; no allocation per sample.
+ * `isReversed` runs the recursion from the last sample to the first.
  */
-export function applySosInPlace(filter: SosCascade, buffer: Float64Array): void {
+export function applySosInPlace(filter: SosCascade, buffer: Float64Array, isReversed = false): void {
   const c = filter.coefficients
   const length = buffer.length
   for (let s = 0; s < filter.sectionCount; s++) {
@@ -23,7 +24,8 @@ export function applySosInPlace(filter: SosCascade, buffer: Float64Array): void 
     let s2 = 0
     for (let start = 0; start < length; start += GUARD_BLOCK) {
       const end = Math.min(length, start + GUARD_BLOCK)
-      for (let i = start; i < end; i++) {
+      for (let k = start; k < end; k++) {
+        const i = isReversed ? length - 1 - k : k
         const x = buffer[i] as number
         const y = b0 * x + s1
         s1 = b1 * x - a1 * y + s2
@@ -40,8 +42,9 @@ export function applySosInPlace(filter: SosCascade, buffer: Float64Array): void 
 
 export interface ApplySosOptions {
   /**
-   * Filter the time-reversed signal and reverse the result, so the filter's ringing lands before
-   * the onset instead of after it (ISO 3382-2:2008 7.3 NOTE: relaxes B·T > 16 to B·T > 4).
+   * Run the filter over the time-reversed signal (last sample first), which equals reversing,
+   * filtering and reversing back: the filter's ringing lands before the onset instead of after it
+   * (ISO 3382-2:2008 7.3 NOTE: relaxes B·T > 16 to B·T > 4). |H| is unchanged (single pass).
    */
   timeReversed?: boolean
   /** Reusable work buffer at least as long as the input; a new one is allocated if absent. */
@@ -49,20 +52,19 @@ export interface ApplySosOptions {
 }
 
 /**
- * Filters a signal through a biquad cascade, forward or time-reversed (single pass, |H| unchanged).
+ * Filters a signal through a biquad cascade, forward or time-reversed. 3- and 4-section cascades
+ * run fused (all sections per sample, states in registers); others section by section.
  * The input is not modified.
  * @returns the filtered signal (a view of `output` of the input's length, when given)
  */
 export function applySos(filter: SosCascade, input: Float64Array, options: ApplySosOptions = {}): Float64Array {
   const output = options.output ? options.output.subarray(0, input.length) : new Float64Array(input.length)
-  if (options.timeReversed) {
-    const last = input.length - 1
-    for (let i = 0; i <= last; i++) output[i] = input[last - i] as number
-    applySosInPlace(filter, output)
-    output.reverse()
-  } else {
+  const isReversed = options.timeReversed ?? false
+  if (filter.sectionCount === 3) filterThreeSections(filter.coefficients, input, output, isReversed)
+  else if (filter.sectionCount === 4) filterFourSections(filter.coefficients, input, output, isReversed)
+  else {
     output.set(input)
-    applySosInPlace(filter, output)
+    applySosInPlace(filter, output, isReversed)
   }
   return output
 }

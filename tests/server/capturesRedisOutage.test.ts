@@ -1,0 +1,60 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { mkdtemp, rm } from 'node:fs/promises'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
+import { Queue } from 'bullmq'
+import { Redis } from 'ioredis'
+import { createApp, type RingdownApp } from '../../server/app'
+import { Capture } from '../../server/models'
+import { createAnalysisQueue } from '../../server/queue/analysisQueue'
+import { requeueUploadedCaptures } from '../../server/services/capturesService'
+import { ANALYSIS_QUEUE_NAME } from '../../shared/jobs/analysisJob'
+import { startTestServices, type TestServices } from '../helpers/testServices'
+import { signedInAgent } from '../helpers/apiAgent'
+import { createWorkspaceFixture, FIXTURE_PASSWORD, type WorkspaceFixture } from '../helpers/workspaceFixture'
+import { decayingNoiseWav } from '../helpers/wavFixtures'
+
+let services: TestServices
+let outage: RingdownApp
+let deadRedis: Redis
+let storageDir: string
+let fixture: WorkspaceFixture
+
+beforeAll(async () => {
+  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-outage-'))
+  services = await startTestServices({ STORAGE_DIR: storageDir })
+  // Nothing listens on loopback port 1: every Redis command waits, as during an outage.
+  deadRedis = new Redis('redis://127.0.0.1:1', { maxRetriesPerRequest: null, retryStrategy: () => 500 })
+  deadRedis.on('error', () => {})
+  outage = createApp({ ...services, queue: createAnalysisQueue(deadRedis) })
+  fixture = await createWorkspaceFixture('Eta')
+})
+afterAll(async () => {
+  await outage.close()
+  deadRedis.disconnect()
+  await services.close()
+  await rm(storageDir, { recursive: true, force: true })
+})
+
+describe('an upload accepted while Redis is down', () => {
+  it('is kept as uploaded and queued exactly once when Redis is back', async () => {
+    const engineer = await signedInAgent(outage.app, fixture.users.engineer.email, FIXTURE_PASSWORD)
+    const token = await engineer.refreshCsrf()
+    const response = await engineer.agent
+      .post(`/api/surveys/${fixture.sharedSurvey.id}/captures`)
+      .set('x-csrf-token', token)
+      .field('kind', 'impulse')
+      .attach('file', Buffer.from(decayingNoiseWav()), 'ir.wav')
+    expect(response.status).toBe(202)
+    expect(response.body.status).toBe('uploaded')
+
+    const liveQueue = createAnalysisQueue(services.redis)
+    expect(await requeueUploadedCaptures(liveQueue)).toBe(1)
+    expect(await requeueUploadedCaptures(liveQueue)).toBe(0)
+    expect((await Capture.findByPk(response.body.id))!.status).toBe('queued')
+    const inspector = new Queue(ANALYSIS_QUEUE_NAME, { connection: services.redis })
+    const jobs = await inspector.getJobs(['waiting'])
+    expect(jobs.filter((job) => job.data.captureId === response.body.id)).toHaveLength(1)
+    await Promise.all([inspector.close(), liveQueue.close()])
+  })
+})
