@@ -45,7 +45,9 @@ export function analyseDecay(response: Float64Array, options: AnalyseDecayOption
   const count = response.length
   const energy = toEnergy(response, options.workspace?.energy.subarray(0, count))
   const suffix = suffixEnergySums(energy, options.workspace?.suffix.subarray(0, count + 1))
-  const lundeby = lundebyTruncation(energy, suffix, { sampleRateHz, initialWindowS: initialWindowS(centreHz) })
+  // Windows ≥ 3/B keep band levels steady enough to fit (3 independent samples; common practice).
+  const minWindowS = options.bandwidthHz ? 3 / options.bandwidthHz : 0
+  const lundeby = lundebyTruncation(energy, suffix, { sampleRateHz, initialWindowS: initialWindowS(centreHz), minWindowS })
   const decay: IntegratedDecay = { suffixEnergy: suffix, endSample: lundeby.truncationSample, tailEnergy: lundeby.tailEnergy }
   const fits = {
     EDT: fitDecayRange(decay, { sampleRateHz, startDb: 0, endDb: -10 }),
