@@ -1,4 +1,4 @@
-import type { RoomDto, RoomUse } from '@shared/api'
+import { ROOM_USES, type RoomDto, type RoomUse } from '@shared/api'
 import { lengthFromMetres, lengthToMetres, volumeFromCubicMetres, volumeToCubicMetres, type LengthUnit } from '@/utils/lengthUnits'
 import { parseNumberInput } from '@/utils/formatNumber'
 
@@ -27,7 +27,8 @@ export interface RoomFormValues {
 export type ExactSizes = Partial<Record<SizeField, { text: string; valueSi: number }>>
 
 export function emptyRoomFormValues(): RoomFormValues {
-  return { name: '', clientName: '', address: '', use: null, sizeMode: 'dimensions', length: '', width: '', height: '', volume: '', notes: '' }
+  // A use is required; the first one (control room) is the most common job, so it starts chosen.
+  return { name: '', clientName: '', address: '', use: ROOM_USES[0], sizeMode: 'dimensions', length: '', width: '', height: '', volume: '', notes: '' }
 }
 
 /** Text for a size input: up to 3 decimals, no grouping, so it reads back as the same number. */

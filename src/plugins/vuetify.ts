@@ -51,7 +51,7 @@ export const vuetify = createVuetify({
     VTextField: { variant: 'outlined', density: 'comfortable', color: 'primary' },
     VTextarea: { variant: 'outlined', density: 'comfortable', color: 'primary' },
     VSelect: { variant: 'outlined', density: 'comfortable', color: 'primary' },
-    VCard: { variant: 'outlined', rounded: 'lg' },
+    VCard: { variant: 'flat', border: true, rounded: 'lg' },
     VBtn: { rounded: 'lg' },
     VDataTable: { hover: true },
     VAlert: { variant: 'tonal', rounded: 'lg' },
