@@ -2,23 +2,18 @@ import { resourceUsage } from 'node:process'
 import { analyseCapture, DEFAULT_ANALYSIS_SETTINGS } from '../shared/acoustics/analyseCapture'
 import { deconvolveSweep } from '../shared/acoustics/sweep/deconvolveSweep'
 import { generateSweep } from '../shared/acoustics/sweep/generateSweep'
-import { synthesizeRoomImpulse } from '../shared/acoustics/synthetic/synthesizeRoomImpulse'
 import { fftConvolve } from '../shared/acoustics/fft/fftConvolve'
+import { benchImpulse } from './benchImpulse'
 import { measure, type Measurement } from './measure'
 
 // Targets from issue #3 (2-core machine): 10 s 48 kHz IR full analysis < 400 ms,
 // 10 s 48 kHz sweep deconvolution < 300 ms, peak memory < 250 MB.
-const OCTAVE_CENTRES_HZ = [63, 125, 250, 500, 1000, 2000, 4000, 8000, 16000]
-
-function roomImpulse(sampleRateHz: number, durationS: number): Float64Array {
-  const bandDecays = OCTAVE_CENTRES_HZ.map((centreHz) => ({ centreHz, T60S: centreHz < 250 ? 0.9 : 0.6 }))
-  return synthesizeRoomImpulse({ sampleRateHz, durationS, bandDecays, noiseFloorDb: -85, seed: 7, directDelayMs: 3 })
-}
+const maxRssMb = () => resourceUsage().maxRSS / 1024 // kilobytes (Node docs, process.resourceUsage)
 
 const results: Measurement[] = []
 for (const sampleRateHz of [48000, 96000]) {
   for (const durationS of [1, 5, 10]) {
-    const impulse = roomImpulse(sampleRateHz, durationS)
+    const impulse = benchImpulse(sampleRateHz, durationS)
     for (const bands of ['octave', 'third'] as const) {
       const settings = { ...DEFAULT_ANALYSIS_SETTINGS, bands }
       results.push(measure(`IR ${durationS} s ${sampleRateHz / 1000} kHz ${bands}`, () => analyseCapture(impulse, { sampleRateHz, kind: 'impulse', settings })))
@@ -26,9 +21,10 @@ for (const sampleRateHz of [48000, 96000]) {
   }
 }
 
+const impulseCasesPeakMb = maxRssMb()
 const sampleRateHz = 48000
 const sweep = generateSweep({ sampleRateHz, f1Hz: 20, f2Hz: 20000, durationS: 10, trailingSilenceS: 1 })
-const recording = fftConvolve(sweep.samples, roomImpulse(sampleRateHz, 1)).subarray(0, sweep.samples.length)
+const recording = fftConvolve(sweep.samples, benchImpulse(sampleRateHz, 1)).subarray(0, sweep.samples.length)
 const sweepParameters = { f1Hz: 20, f2Hz: 20000, durationS: 10 }
 results.push(measure('sweep 10 s 48 kHz deconvolution', () => deconvolveSweep(recording, { sampleRateHz, sweep: sweepParameters })))
 results.push(
@@ -42,5 +38,4 @@ console.log(`${'case'.padEnd(width)}  median ms  best ms  runs`)
 for (const result of results) {
   console.log(`${result.label.padEnd(width)}  ${result.medianMs.toFixed(0).padStart(9)}  ${result.minMs.toFixed(0).padStart(7)}  ${result.runs}`)
 }
-// maxRSS is in kilobytes (Node docs, process.resourceUsage).
-console.log(`peak memory (max RSS): ${(resourceUsage().maxRSS / 1024).toFixed(0)} MB; heap used now ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(0)} MB`)
+console.log(`peak memory (max RSS) after the impulse cases: ${impulseCasesPeakMb.toFixed(0)} MB; after the sweep cases: ${maxRssMb().toFixed(0)} MB`)

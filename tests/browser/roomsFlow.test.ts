@@ -39,9 +39,11 @@ describe('rooms flow in Chromium', () => {
     await page.getByTestId('room-height').locator('input').fill('2.6')
     await page.screenshot({ path: screenshotPath('03-new-room-form') })
     await page.getByTestId('room-save').click()
+    await page.waitForURL(/\/rooms\/\d+/)
+    await page.screenshot({ path: screenshotPath('04-room-page'), fullPage: true })
 
     await page.goto(`${running.baseUrl}/rooms`)
     await expect.poll(() => page.getByTestId('rooms-table').textContent()).toContain('Browser test mix room')
-    await page.screenshot({ path: screenshotPath('04-rooms-with-new-room'), fullPage: true })
+    await page.screenshot({ path: screenshotPath('05-rooms-with-new-room'), fullPage: true })
   })
 })

@@ -32,14 +32,21 @@ function record(played: Float64Array, response: Float64Array, latencySamples = 0
   return recording
 }
 
-function expectSameResponse(recovered: Float64Array, timeZeroSample: number, expected: Float64Array, offsetSamples = 0): void {
-  const aligned = recovered.slice(timeZeroSample + offsetSamples, timeZeroSample + offsetSamples + expected.length)
+/**
+ * Compares the recovered response with the known one, both from the start of the recovered
+ * pre-roll: the band-limited response rings a little before its peak, and that ringing belongs to
+ * it (cutting it would bend the low end).
+ */
+function expectSameResponse(recovered: Float64Array, timeZeroSample: number, known: Float64Array, offsetSamples = 0): void {
+  const aligned = recovered.slice(offsetSamples, timeZeroSample + offsetSamples + known.length)
+  const expected = new Float64Array(aligned.length)
+  expected.set(known, timeZeroSample)
   expect(normalisedCorrelation(bandLimit(aligned, band), bandLimit(expected, band))).toBeGreaterThan(0.99)
   const options = { sampleRateHz: fs, smoothingFraction: 6 as const, pointCount: 200 }
   const got = computeFrequencyResponse(aligned, options)
   const want = computeFrequencyResponse(expected, options)
   got.frequencyHz.forEach((f, i) => {
-    if (f >= 50 && f <= 10000) expectWithin(got.magnitudeDb[i] as number, want.magnitudeDb[i] as number, 0.5)
+    if (f >= 40 && f <= 10000) expectWithin(got.magnitudeDb[i] as number, want.magnitudeDb[i] as number, 0.5)
   })
 }
 
@@ -77,9 +84,9 @@ describe('deconvolveSweep', () => {
     const distorted = record(sweep.map((x) => x + a * x * x), delta)
 
     it.each([
-      ['sweep parameters', { sweep: sweepParameters }],
-      ['reference sweep', { referenceSweep: sweep }],
-    ])('returns the injected 2nd harmonic level per octave band from the %s (Farina 2000)', (_name, source) => {
+      { name: 'sweep parameters', source: { sweep: sweepParameters } },
+      { name: 'reference sweep', source: { referenceSweep: sweep } },
+    ])('returns the injected 2nd harmonic level per octave band from the $name (Farina 2000)', ({ source }) => {
       const result = deconvolveSweep(distorted, { sampleRateHz: fs, ...source })
       expect(result.harmonicImpulses.map((h) => h.order)).toEqual([2, 3, 4, 5])
       const checked = result.distortion.filter((b) => b.centreHz >= 63 && b.centreHz <= 4000)
@@ -105,11 +112,11 @@ describe('deconvolveSweep', () => {
   })
 
   it.each([
-    [{}, /either the sweep parameters or the reference sweep/],
-    [{ sweep: sweepParameters, referenceSweep: sweep }, /not both/],
-    [{ sweep: { ...sweepParameters, f2Hz: 30000 } }, /below half the sample rate/],
-    [{ sweep: { ...sweepParameters, durationS: 60 } }, /shorter than the sweep/],
-  ])('throws a DspInputError when given %o', (source, message) => {
+    { name: 'neither source', source: {}, message: /either the sweep parameters or the reference sweep/ },
+    { name: 'both sources', source: { sweep: sweepParameters, referenceSweep: sweep }, message: /not both/ },
+    { name: 'f2 above fs/2', source: { sweep: { ...sweepParameters, f2Hz: 30000 } }, message: /below half the sample rate/ },
+    { name: 'a sweep longer than the recording', source: { sweep: { ...sweepParameters, durationS: 60 } }, message: /shorter than the sweep/ },
+  ])('throws a DspInputError when given $name', ({ source, message }) => {
     expect(() => deconvolveSweep(recording, { sampleRateHz: fs, ...source })).toThrow(message)
   })
 
