@@ -23,9 +23,25 @@ function numberOption(value: string | undefined, name: string, fallback?: number
   return parsed
 }
 
+/** parseArgs reads "--level-db -6" as two options; join a negative number to its option. */
+function joinNegativeValues(argv: string[]): string[] {
+  const joined: string[] = []
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i] as string
+    const next = argv[i + 1]
+    if (arg.startsWith('--') && !arg.includes('=') && next !== undefined && /^-(\d|\.\d)/.test(next)) {
+      joined.push(`${arg}=${next}`)
+      i++
+    } else {
+      joined.push(arg)
+    }
+  }
+  return joined
+}
+
 function main(argv: string[]): void {
   const { values, positionals } = parseArgs({
-    args: argv,
+    args: joinNegativeValues(argv),
     allowPositionals: true,
     options: {
       f1: { type: 'string' },

@@ -45,6 +45,7 @@ cat <<MSG
     owner@ringdown.test     owner of the demo consultancy
     engineer@ringdown.test  engineer
     client@ringdown.test    client (sees the shared demo room)
+    viewer@ringdown.test    viewer, read-only (a student)
   Press Ctrl-C to stop. Data stays in ${RINGDOWN_DATA_DIR}.
 
 MSG

@@ -19,7 +19,9 @@ const PRE_ONSET_S = 0.005
  * Per-band decay analysis: each IEC 61260-1 band (all that fit below 0.45·fs) is filtered with its
  * Butterworth band-pass (forward, or time-reversed per ISO 3382-2 7.3 NOTE) — low bands after
  * zero-phase decimation (designBandFilterBank) — and analysed from the broadband onset
- * (ISO 3382-1 A.3.4: t = 0 from the broadband response, not per band). The pre-onset margin is a
+ * (ISO 3382-1 A.3.4: t = 0 from the broadband response, not per band). Forward filtering moves band
+ * energy late by the filter's delay, time-reversed filtering moves it early; C80 and D50 of a band
+ * can differ by about 1 dB / 0.05 between the two (e.g. BRAS CR2, 800 Hz third). The pre-onset margin is a
  * multiple of the largest decimation factor, so the onset falls on a whole sample at every rate.
  * Work buffers are allocated once and reused for every band.
  */
@@ -45,8 +47,9 @@ export function analyseBandDecays(impulse: Float64Array, options: AnalyseBandDec
   for (const entry of bank.bands) {
     const input = levelFor(entry.decimationFactor)
     const output = applySos(entry.filter, input, { timeReversed: isTimeReversed, output: filtered })
+    const start = skip / entry.decimationFactor
     const { band } = entry
-    const { parameters, curve } = analyseDecay(output.subarray(skip / entry.decimationFactor), {
+    const { parameters, curve } = analyseDecay(output.subarray(start), {
       sampleRateHz: entry.sampleRateHz,
       centreHz: band.nominalHz,
       exactCentreHz: band.exactCentreHz,

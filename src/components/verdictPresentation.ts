@@ -35,5 +35,7 @@ export function formatTargetRange(target: Pick<TargetBand, 'minS' | 'maxS'> | un
 export function describeVerdict(centreHz: number, measuredS: number | null, target: TargetBand | undefined, verdict: BandVerdict): string {
   const measured = measuredS === null ? 'not measured' : `measured ${formatMeasure(measuredS, 2, 's')}`
   const flagged = verdict === 'not-reliable' && measuredS !== null ? ' (flagged by the analysis, so not judged)' : ''
-  return `${formatFrequencyWithUnit(centreHz)}: ${measured}${flagged}, target ${formatTargetRange(target)} — ${PRESENTATION[verdict].label.toLowerCase()}.`
+  const range = formatTargetRange(target)
+  const targetText = range === 'no limit' ? 'no target limit' : `target ${range}`
+  return `${formatFrequencyWithUnit(centreHz)}: ${measured}${flagged}, ${targetText} — ${PRESENTATION[verdict].label.toLowerCase()}.`
 }

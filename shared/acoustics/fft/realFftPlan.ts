@@ -20,8 +20,12 @@ export interface RealFftPlan {
   transformed: Float64Array
 }
 
-/** Plans are kept while their total size stays under this many samples (about 100 MB). */
-const CACHE_BUDGET_SAMPLES = 1 << 22
+/**
+ * Plans are kept while their sizes add up to at most this many samples: one plan of N samples
+ * holds about 4·N numbers (work buffers, twiddles, the fft.js table), so 2^21 caps the cache near
+ * 64 MB — room for the 2^20 plan of a 10 s, 96 kHz response plus the small ones.
+ */
+const CACHE_BUDGET_SAMPLES = 1 << 21
 const cache = new Map<number, RealFftPlan>()
 
 function buildPlan(size: number): RealFftPlan {

@@ -23,10 +23,15 @@ export function inverseSweep(options: SweepOptions): Float64Array {
   const scale = (4 * f2Hz) / (amplitude * rateS * sampleRateHz * sampleRateHz)
   const last = sweep.length - 1
   const inverse = new Float64Array(sweep.length)
+  // Sample n of the inverse is sweep sample last − n, played at t = (last − n)/fs; f/f2 = e^((t − T)/L).
+  const envelopeAt = (n: number) => Math.exp(((last - n) / sampleRateHz - durationS) / rateS)
+  const decayPerSample = Math.exp(-1 / (rateS * sampleRateHz))
+  let envelope = 1
   for (let n = 0; n <= last; n++) {
-    // Sample n of the inverse is sweep sample last − n, played at t = (last − n)/fs; f/f2 = e^((t − T)/L).
-    const timeS = (last - n) / sampleRateHz
-    inverse[n] = scale * Math.exp((timeS - durationS) / rateS) * (sweep[last - n] as number)
+    // A recurrence instead of one exp per sample, re-seeded now and then against drift.
+    if ((n & 4095) === 0) envelope = envelopeAt(n)
+    inverse[n] = scale * envelope * (sweep[last - n] as number)
+    envelope *= decayPerSample
   }
   return inverse
 }

@@ -45,6 +45,13 @@ function parseContainer(bytes: Uint8Array): InstanceType<typeof WaveFile> {
   try {
     wav.fromBuffer(bytes, false)
   } catch {
+    // wavefile also throws on codecs it cannot set up (e.g. 4-bit ADPCM): tell those apart.
+    const isLittleEndian = !bytes.subarray(0, 4).every((byte, i) => byte === 'RIFX'.charCodeAt(i))
+    const fmtStart = findChunkStart(bytes, 'fmt ', isLittleEndian)
+    if (fmtStart !== null && fmtStart + 2 <= bytes.length) {
+      const code = new DataView(bytes.buffer, bytes.byteOffset + fmtStart, 2).getUint16(0, isLittleEndian)
+      if (code !== FORMAT_PCM && code !== FORMAT_FLOAT && code !== FORMAT_EXTENSIBLE) unsupported(`format code ${code}`)
+    }
     throw new WavDecodeError('truncated', 'The WAV header is incomplete or corrupt (no usable "fmt " or "data" chunk). Export the file again.')
   }
   return wav
@@ -56,11 +63,11 @@ function sampleFormatOf(fmt: FmtChunk): WavSampleFormat {
   const bits = fmt.bitsPerSample
   if (code === FORMAT_PCM && (bits === 16 || bits === 24 || bits === 32)) return 'pcm'
   if (code === FORMAT_FLOAT && (bits === 32 || bits === 64)) return 'float'
-  const what = code === FORMAT_PCM ? `${bits}-bit PCM` : code === FORMAT_FLOAT ? `${bits}-bit float` : `format code ${code}`
-  throw new WavDecodeError(
-    'unsupported-encoding',
-    `This WAV uses ${what}; use 16/24/32-bit PCM or 32/64-bit float, uncompressed.`,
-  )
+  unsupported(code === FORMAT_PCM ? `${bits}-bit PCM` : code === FORMAT_FLOAT ? `${bits}-bit float` : `format code ${code}`)
+}
+
+function unsupported(what: string): never {
+  throw new WavDecodeError('unsupported-encoding', `This WAV uses ${what}; use 16/24/32-bit PCM or 32/64-bit float, uncompressed.`)
 }
 
 /**
@@ -75,10 +82,10 @@ export function readWavHeader(bytes: Uint8Array): WavHeader {
   // wavefile resolves the declared size (also RF64's ds64 size); the offset comes from our own walk.
   const declaredDataBytes = (wav.data as { chunkSize: number }).chunkSize
   const dataStartByte = findChunkStart(bytes, 'data', isLittleEndian)
+  const format = sampleFormatOf(fmt)
   if (dataStartByte === null || !(fmt.numChannels >= 1) || !(fmt.blockAlign >= 1)) {
     throw new WavDecodeError('truncated', 'The WAV header is incomplete or corrupt. Export the file again.')
   }
-  const format = sampleFormatOf(fmt)
   if (!(fmt.sampleRate >= MIN_SAMPLE_RATE_HZ && fmt.sampleRate <= MAX_SAMPLE_RATE_HZ)) {
     throw new WavDecodeError('unsupported-rate', `The sample rate is ${fmt.sampleRate} Hz; use 22 050 Hz to 192 000 Hz.`)
   }

@@ -54,7 +54,7 @@ function fitSeries(name: FitName, segment: number[], colors: ChartColors) {
     // The evaluation range: from where the curve crosses the top limit to where it crosses the bottom.
     markArea: {
       silent: true,
-      itemStyle: { color: withAlpha(color, colors.isDark ? 0.16 : 0.12) },
+      itemStyle: { color: withAlpha(color, colors.isDark ? 0.12 : 0.09) },
       label: { show: false },
       data: [[{ xAxis: startMs, yAxis: topDb }, { xAxis: endMs, yAxis: bottomDb }]] as [{ xAxis: number; yAxis: number }, { xAxis: number; yAxis: number }][],
     },

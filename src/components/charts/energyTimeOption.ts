@@ -14,13 +14,20 @@ export interface EnergyTimeInput {
 }
 
 /** Lowest level shown, dB re peak: below this the curve is background noise. */
-const FLOOR_DB = -90
+const FLOOR_DB = -100
+
+/** Rounds a time up to a tidy axis end: 1995 → 2000, 487 → 490, 78 → 78. */
+export function niceCeilMs(valueMs: number): number {
+  if (valueMs <= 0) return 0
+  const stepMs = Math.max(1, 10 ** (Math.floor(Math.log10(valueMs)) - 1) * 5)
+  return Math.ceil(valueMs / stepMs) * stepMs
+}
 
 function visibleRangeMs(input: EnergyTimeInput): [number, number] {
   if (input.rangeMs) return input.rangeMs
   const first = input.timeMs[0] ?? 0
   const last = input.timeMs[input.timeMs.length - 1] ?? 1
-  return [Math.floor(first), Math.ceil(last)]
+  return [Math.floor(first), niceCeilMs(last)]
 }
 
 export function describeEnergyTime(input: EnergyTimeInput): string {
@@ -34,13 +41,15 @@ export function describeEnergyTime(input: EnergyTimeInput): string {
 export function energyTimeOption(input: EnergyTimeInput, colors: ChartColors, fileName = 'energy-time'): RingdownChartOption {
   const [startMs, endMs] = visibleRangeMs(input)
   const inRange = input.levelDb.filter((_, i) => (input.timeMs[i] as number) >= startMs && (input.timeMs[i] as number) <= endMs)
-  const [lowDb, highDb] = roundedRange(inRange, 10, [-80, 0])
+  // 10 dB grid lines for the early part, 20 dB when the whole decay into the noise is shown.
+  const stepDb = roundedRange(inRange, 10, [-80, 0])[0] < -60 ? 20 : 10
+  const [lowDb, highDb] = roundedRange(inRange, stepDb, [-80, 0])
   const markers = (input.markers ?? []).filter((m) => m.timeMs >= startMs && m.timeMs <= endMs)
   return {
     ...baseChartOption(colors, { description: describeEnergyTime(input), fileName, hasLegend: false }),
     grid: { left: 64, right: 24, top: 44, bottom: 52 },
     xAxis: { type: 'value', min: startMs, max: endMs, ...valueAxisStyle(colors, 'Time after the onset (ms)', 30) },
-    yAxis: { type: 'value', min: Math.max(FLOOR_DB, lowDb), max: Math.max(0, highDb), ...valueAxisStyle(colors, 'Level (dB re peak)', 44) },
+    yAxis: { type: 'value', min: Math.max(FLOOR_DB, lowDb), max: Math.max(0, highDb), interval: stepDb, ...valueAxisStyle(colors, 'Level (dB re peak)', 44) },
     tooltip: {
       ...tooltipStyle(colors),
       formatter: (params: unknown) => {

@@ -12,12 +12,36 @@ export interface RoomModeMark {
 /** Quietest level coloured, dB re the first slice's maximum (the engine clamps at −60 dB). */
 const FLOOR_DB = -60
 
-/** Grid indices that get a frequency label: the bin nearest each low-frequency tick inside the grid. */
-export function labelledFrequencyIndices(frequenciesHz: readonly number[]): Set<number> {
+/** A tick labels a bin only if the bin lies this close to it (a modal-view grid is ~1/40 octave). */
+const MAX_LABEL_OFFSET_OCTAVES = 0.05
+
+/** Grid index → tick frequency for the bins nearest each low-frequency tick inside the grid. */
+export function labelledFrequencyIndices(frequenciesHz: readonly number[]): Map<number, number> {
   const first = frequenciesHz[0]
   const last = frequenciesHz[frequenciesHz.length - 1]
-  if (first === undefined || last === undefined) return new Set()
-  return new Set(LOW_FREQUENCY_TICKS_HZ.filter((tickHz) => tickHz >= first * 0.99 && tickHz <= last * 1.01).map((tickHz) => nearestFrequencyIndex(frequenciesHz, tickHz)))
+  const labels = new Map<number, number>()
+  if (first === undefined || last === undefined) return labels
+  const octavesOff = (index: number, tickHz: number) => Math.abs(Math.log2((frequenciesHz[index] as number) / tickHz))
+  for (const tickHz of LOW_FREQUENCY_TICKS_HZ) {
+    const index = nearestFrequencyIndex(frequenciesHz, tickHz)
+    // A coarse grid may have no bin near a tick; a label there would name the wrong frequency.
+    if (octavesOff(index, tickHz) > MAX_LABEL_OFFSET_OCTAVES) continue
+    const taken = labels.get(index)
+    if (taken === undefined || octavesOff(index, tickHz) < octavesOff(index, taken)) labels.set(index, tickHz)
+  }
+  return labels
+}
+
+/** Modes falling in the same bin share one line, their labels joined ("1,0,0 / 0,0,1"). */
+export function modeLines(frequenciesHz: readonly number[], modes: readonly RoomModeMark[]): { index: number; label: string }[] {
+  const byIndex = new Map<number, string[]>()
+  for (const mode of modes) {
+    const index = nearestFrequencyIndex(frequenciesHz, mode.frequencyHz)
+    // Modes outside the grid (more than a tenth of an octave from any bin) are not drawn.
+    if (index < 0 || Math.abs(Math.log2(mode.frequencyHz / (frequenciesHz[index] as number))) > 0.1) continue
+    byIndex.set(index, [...(byIndex.get(index) ?? []), mode.label])
+  }
+  return [...byIndex.entries()].map(([index, labels]) => ({ index, label: labels.join(' / ') }))
 }
 
 export function describeWaterfall(data: WaterfallData, modes: readonly RoomModeMark[]): string {
@@ -46,7 +70,7 @@ export function waterfallOption(data: WaterfallData, modes: readonly RoomModeMar
       type: 'category',
       data: data.frequencyHz.map((frequencyHz) => String(frequencyHz)),
       ...axisStyle,
-      axisLabel: { color: colors.mutedText, interval: (index: number) => labelled.has(index), formatter: (value: string) => formatFrequencyHz(Number(value)) },
+      axisLabel: { color: colors.mutedText, interval: (index: number) => labelled.has(index), formatter: (_value: string, index: number) => formatFrequencyHz(labelled.get(index) ?? 0) },
       axisTick: { interval: (index: number) => labelled.has(index), lineStyle: { color: colors.axisLine } },
       splitLine: { show: false },
     },
@@ -54,6 +78,8 @@ export function waterfallOption(data: WaterfallData, modes: readonly RoomModeMar
       type: 'category',
       data: data.timeMs.map((timeMs) => formatMeasure(timeMs, 0)),
       ...valueAxisStyle(colors, 'Slice start (ms)', 48),
+      axisLabel: { color: colors.mutedText, interval: data.timeMs.length > 12 ? 1 : 0 },
+      axisTick: { show: false },
       splitLine: { show: false },
     },
     visualMap: {
@@ -92,10 +118,7 @@ export function waterfallOption(data: WaterfallData, modes: readonly RoomModeMar
           symbol: 'none',
           lineStyle: { color: colors.palette.marker, type: 'dashed', width: 1.2 },
           label: { color: colors.text, position: 'insideEndTop', fontSize: 11 },
-          data: modes
-            .map((mode) => ({ mode, index: nearestFrequencyIndex(data.frequencyHz, mode.frequencyHz) }))
-            .filter(({ mode, index }) => index >= 0 && Math.abs(Math.log2(mode.frequencyHz / (data.frequencyHz[index] as number))) < 0.1)
-            .map(({ mode, index }) => ({ xAxis: index, name: mode.label, label: { formatter: () => mode.label } })),
+          data: modeLines(data.frequencyHz, modes).map(({ index, label }) => ({ xAxis: index, name: label, label: { formatter: () => label } })),
         },
       },
     ],

@@ -1,0 +1,90 @@
+import { z } from 'zod'
+import type { SpatialAverageBand } from '../acoustics/spatialAverage'
+import type { BandVerdict } from '../room/targets/bandVerdict'
+import type { TargetMask } from '../room/targets/targetMask'
+import type { AnalysisSettings, BandResolution } from '../types/analysis'
+import type { SurveyDto } from './surveys'
+
+export const bandResolutionQuerySchema = z.object({
+  bands: z.enum(['octave', 'third']).default('octave'),
+})
+
+/** One band of a survey as judged against a target: which T was used and whether it is trustworthy. */
+export interface SurveyBandReading {
+  centreHz: number
+  /** The reverberation time judged: mean T30, or mean T20 where T30 is not usable. */
+  reverberationTimeS: number | null
+  parameter: 'T30' | 'T20' | null
+  isReliable: boolean
+  /** Why a band is not reliable, in plain words; null when it is. */
+  reliabilityNote: string | null
+}
+
+export interface SurveySummaryDto {
+  survey: SurveyDto
+  bandResolution: BandResolution
+  captureCount: number
+  /** Captures with an analysis at this band resolution. */
+  analysedCount: number
+  /** Spatial average over positions (mean, spread, count per parameter). */
+  bands: SpatialAverageBand[]
+  readings: SurveyBandReading[]
+  /** Power average of the positions' magnitude responses, dB; null before any analysis. */
+  averagedResponse: { frequencyHz: number[]; magnitudeDb: number[] } | null
+}
+
+export const comparisonQuerySchema = z.object({
+  surveys: z
+    .string({ error: 'Choose at least two surveys to compare.' })
+    .transform((value) => value.split(',').filter(Boolean).map(Number))
+    .pipe(z.array(z.number().int().positive('Survey ids are positive whole numbers.')).min(2, 'Choose at least two surveys to compare.').max(6, 'Compare at most six surveys at once.')),
+  bands: z.enum(['octave', 'third']).default('octave'),
+})
+
+export interface ComparisonDifference {
+  centreHz: number
+  beforeS: number | null
+  afterS: number | null
+  /** after − before, s. */
+  changeS: number | null
+  changePercent: number | null
+}
+
+export interface ComparisonDto {
+  roomId: number
+  roomName: string
+  volumeM3: number | null
+  bandResolution: BandResolution
+  target: TargetMask | null
+  /** Surveys in the order asked for (first = before, last = after). */
+  surveys: { summary: SurveySummaryDto; verdicts: { centreHz: number; verdict: BandVerdict }[] }[]
+  /** First survey against the last, per band. */
+  differences: ComparisonDifference[]
+  /** One line on what the treatment achieved; null without a target or volume. */
+  summaryLine: string | null
+}
+
+export const reanalyseBodySchema = z.object({
+  bands: z.enum(['octave', 'third']),
+  smoothing: z.union([z.literal(1), z.literal(3), z.literal(6), z.literal(12), z.literal(24), z.literal(48)]),
+  channel: z.number().int().min(0).max(63),
+  gateMs: z.number().positive().max(2000).nullable(),
+  timeReversedFiltering: z.boolean(),
+}) satisfies z.ZodType<AnalysisSettings>
+
+export interface AnalysisListItemDto {
+  id: number
+  settings: AnalysisSettings
+  engineVersion: string
+  createdAt: string
+}
+
+export const sweepQuerySchema = z
+  .object({
+    f1: z.coerce.number().min(10, 'Start at 10 Hz or above.').max(1000, 'Start at 1 kHz or below.').default(20),
+    f2: z.coerce.number().min(1000, 'End at 1 kHz or above.').max(96_000).default(20_000),
+    seconds: z.coerce.number().min(1, 'Sweeps last at least 1 s.').max(60, 'Sweeps last at most 60 s.').default(6),
+    rate: z.coerce.number().refine((r) => [44_100, 48_000, 88_200, 96_000].includes(r), 'Use 44100, 48000, 88200 or 96000 Hz.').default(48_000),
+    levelDb: z.coerce.number().min(-60, 'Level is −60 to −1 dBFS.').max(-1, 'Level is −60 to −1 dBFS.').default(-12),
+  })
+  .refine((q) => q.f2 < q.rate / 2, { message: 'The end frequency must be below half the sample rate.', path: ['f2'] })
