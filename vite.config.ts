@@ -28,6 +28,8 @@ export default defineConfig({
           include: ['tests/shared/**/*.test.ts', 'tests/client/**/*.test.ts', 'tests/worker/unit/**/*.test.ts', 'tests/cli/**/*.test.ts'],
           environment: 'node',
           testTimeout: 60_000,
+          // Vuetify's components import their CSS; inlining lets Vite handle it in component tests.
+          server: { deps: { inline: ['vuetify'] } },
         },
       },
       {

@@ -38,7 +38,8 @@ export async function show(req: Request, res: Response) {
 }
 
 export async function latestAnalysis(req: Request, res: Response) {
-  res.json(await captures.getLatestAnalysis(currentUserId(req), (req.params as unknown as CaptureParams).captureId))
+  const { analysisId } = req.query as { analysisId?: number }
+  res.json(await captures.getLatestAnalysis(currentUserId(req), (req.params as unknown as CaptureParams).captureId, analysisId))
 }
 
 export function remove(storageDir: string) {

@@ -35,7 +35,7 @@ export function capturesRouter(context: { storageDir: string; uploadLimitMb: num
     captures.create(context),
   )
   router.get('/captures/:captureId', requireAuth, validate({ params: captureParams }), captures.show)
-  router.get('/captures/:captureId/analysis', requireAuth, validate({ params: captureParams }), captures.latestAnalysis)
+  router.get('/captures/:captureId/analysis', requireAuth, validate({ params: captureParams, query: z.object({ analysisId: idParam.optional() }) }), captures.latestAnalysis)
   router.delete('/captures/:captureId', requireAuth, validate({ params: captureParams }), captures.remove(context.storageDir))
   return router
 }

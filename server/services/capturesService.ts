@@ -9,7 +9,9 @@ import { contentPath } from '../storage/contentPath'
 import { readWavFacts } from '../../shared/acoustics/wav/readWavFacts'
 import { DspInputError } from '../../shared/acoustics/errors'
 import type { AnalysisQueue } from '../queue/analysisQueue'
-import type { AnalysisDto, CaptureDto, CreateCaptureFields } from '../../shared/api/captures'
+import type { AnalysisDto, CaptureDto, CaptureHeadline, CreateCaptureFields } from '../../shared/api/captures'
+import type { AnalysisResult } from '../../shared/types/analysis'
+import { latestAnalysesByCapture } from './analysisLookup'
 import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../worker/analysisSettings'
 import { logger } from '../logger'
 
@@ -145,10 +147,25 @@ export async function requeueUploadedCaptures(queue: AnalysisQueue): Promise<num
   return waiting.filter((c) => c.status === 'queued').length
 }
 
+/** Mid-band (500 Hz and 1 kHz octaves, or the thirds 400 Hz–1.25 kHz) mean of a parameter. */
+function midBand(result: AnalysisResult, parameter: 'T30' | 'T20' | 'EDT' | 'C80'): number | null {
+  const values = result.bands
+    .filter((band) => band.centreHz >= 355 && band.centreHz <= 1413)
+    .map((band) => band[parameter])
+    .filter((value): value is number => value !== null)
+  return values.length === 0 ? null : values.reduce((sum, value) => sum + value, 0) / values.length
+}
+
+export function headlineOf(result: AnalysisResult | undefined): CaptureHeadline | null {
+  if (!result) return null
+  return { T30S: midBand(result, 'T30'), T20S: midBand(result, 'T20'), EDTS: midBand(result, 'EDT'), C80Db: midBand(result, 'C80') }
+}
+
 export async function listCaptures(userId: number, surveyId: number): Promise<CaptureDto[]> {
   await requireSurveyAccess(userId, surveyId, 'room:read')
   const captures = await Capture.findAll({ where: { surveyId }, order: [['id', 'ASC']] })
-  return captures.map(toCaptureDto)
+  const analyses = await latestAnalysesByCapture(captures.map((c) => c.id))
+  return captures.map((capture) => ({ ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }))
 }
 
 async function requireCaptureAccess(userId: number, captureId: number) {
@@ -165,7 +182,9 @@ async function requireCaptureAccess(userId: number, captureId: number) {
 }
 
 export async function getCapture(userId: number, captureId: number): Promise<CaptureDto> {
-  return toCaptureDto((await requireCaptureAccess(userId, captureId)).capture)
+  const { capture } = await requireCaptureAccess(userId, captureId)
+  const analyses = await latestAnalysesByCapture([capture.id])
+  return { ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }
 }
 
 /** Owners and engineers delete any capture; a client only the ones they uploaded. */
@@ -179,9 +198,10 @@ export async function deleteCapture(userId: number, captureId: number, storageDi
   if (stillUsed === 0) await rm(contentPath(storageDir, capture.sha256), { force: true })
 }
 
-export async function getLatestAnalysis(userId: number, captureId: number): Promise<AnalysisDto> {
+/** The newest analysis of a capture, or the one asked for by id. */
+export async function getLatestAnalysis(userId: number, captureId: number, analysisId?: number): Promise<AnalysisDto> {
   await requireCaptureAccess(userId, captureId)
-  const analysis = await Analysis.findOne({ where: { captureId }, order: [['updatedAt', 'DESC']] })
+  const analysis = await Analysis.findOne({ where: { captureId, ...(analysisId ? { id: analysisId } : {}) }, order: [['updatedAt', 'DESC']] })
   if (!analysis) throw new NotFoundError('An analysis of that capture', 'analysis-not-ready')
   return {
     id: analysis.id,

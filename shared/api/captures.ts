@@ -30,6 +30,14 @@ export const createCaptureFieldsSchema = z
   })
 export type CreateCaptureFields = z.infer<typeof createCaptureFieldsSchema>
 
+/** Mid-band values of the newest analysis, for tables. */
+export interface CaptureHeadline {
+  T30S: number | null
+  T20S: number | null
+  EDTS: number | null
+  C80Db: number | null
+}
+
 export interface CaptureDto {
   id: number
   surveyId: number
@@ -53,6 +61,8 @@ export interface CaptureDto {
   durationS: number
   status: CaptureStatus
   statusMessage: string | null
+  /** Present on list and detail reads; null before the first analysis. */
+  headline?: CaptureHeadline | null
   createdAt: string
   updatedAt: string
 }

@@ -20,7 +20,7 @@ export function onUnauthenticated(listener: (() => void) | null): void {
 }
 
 /** The session's CSRF token, fetched once and shared by concurrent callers. */
-function getCsrfToken(): Promise<string> {
+export function getCsrfToken(): Promise<string> {
   if (!csrfToken) {
     const pending = send('GET', CSRF_PATH).then((body) => (body as CsrfResponse).csrfToken)
     pending.catch(() => {
@@ -52,7 +52,8 @@ async function send(method: Method, path: string, body?: unknown, token?: string
   return json
 }
 
-function toApiError(status: number, json: unknown): ApiError {
+/** Our error JSON → ApiError; anything else → an ApiError with a readable message. */
+export function toApiError(status: number, json: unknown): ApiError {
   const error = (json as { error?: Partial<ApiErrorBody> } | undefined)?.error
   if (error && typeof error.code === 'string' && typeof error.message === 'string') {
     return new ApiError(status, { code: error.code, message: error.message, fields: error.fields })
@@ -79,9 +80,19 @@ export async function request<T>(method: Method, path: string, body?: unknown): 
       return (await send(method, path, body, await getCsrfToken())) as T
     }
   } catch (error) {
-    if (error instanceof ApiError && error.code === 'unauthenticated' && path !== '/auth/me') unauthenticatedListener?.()
+    reportIfUnauthenticated(error, path)
     throw error
   }
+}
+
+/** Tells the listener when a call other than `GET /auth/me` found the session gone. */
+export function reportIfUnauthenticated(error: unknown, path: string): void {
+  if (error instanceof ApiError && error.code === 'unauthenticated' && path !== '/auth/me') unauthenticatedListener?.()
+}
+
+/** The full URL of an API path, for plain links (downloads) and the upload request. */
+export function apiUrl(path: string): string {
+  return `${API_BASE}${path}`
 }
 
 /** Builds a query string from the defined, non-empty values. */

@@ -16,3 +16,7 @@ export function updateSurvey(surveyId: number, body: UpdateSurveyBody): Promise<
 export function deleteSurvey(surveyId: number): Promise<void> {
   return request<void>('DELETE', `/surveys/${surveyId}`)
 }
+
+export function getSurvey(surveyId: number): Promise<SurveyDto> {
+  return request<SurveyDto>('GET', `/surveys/${surveyId}`)
+}

@@ -14,6 +14,8 @@ declare module 'vue-router' {
 
 const ROOM_MANAGERS: readonly Role[] = ['owner', 'engineer']
 const roomIdProp = (route: RouteLocationNormalized) => ({ roomId: Number(route.params.roomId) })
+const surveyProps = (route: RouteLocationNormalized) => ({ roomId: Number(route.params.roomId), surveyId: Number(route.params.surveyId) })
+const captureIdProp = (route: RouteLocationNormalized) => ({ captureId: Number(route.params.captureId) })
 
 export const router = createRouter({
   history: createWebHistory(import.meta.env.BASE_URL),
@@ -25,6 +27,10 @@ export const router = createRouter({
     { path: '/rooms/new', name: 'room-new', component: () => import('@/views/RoomFormView.vue'), meta: { roles: ROOM_MANAGERS, title: 'New room' } },
     { path: '/rooms/:roomId(\\d+)', name: 'room', component: () => import('@/views/RoomView.vue'), props: roomIdProp, meta: { title: 'Room' } },
     { path: '/rooms/:roomId(\\d+)/edit', name: 'room-edit', component: () => import('@/views/RoomFormView.vue'), props: roomIdProp, meta: { title: 'Edit room' } },
+    { path: '/rooms/:roomId(\\d+)/surveys/:surveyId(\\d+)', name: 'survey', component: () => import('@/views/SurveyView.vue'), props: surveyProps, meta: { title: 'Survey' } },
+    { path: '/rooms/:roomId(\\d+)/compare', name: 'compare', component: () => import('@/views/CompareView.vue'), props: roomIdProp, meta: { title: 'Compare surveys' } },
+    { path: '/captures/:captureId(\\d+)', name: 'capture', component: () => import('@/views/CaptureView.vue'), props: captureIdProp, meta: { title: 'Capture' } },
+    { path: '/test-signal', name: 'test-signal', component: () => import('@/views/TestSignalView.vue'), meta: { title: 'Test signal' } },
     { path: '/workspace/members', name: 'members', component: () => import('@/views/MembersView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Members' } },
     { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { access: 'any', title: 'Page not found' } },
   ],

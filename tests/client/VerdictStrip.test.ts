@@ -4,6 +4,7 @@ import { mount } from '@vue/test-utils'
 import { createVuetify } from 'vuetify'
 import * as components from 'vuetify/components'
 import * as directives from 'vuetify/directives'
+import { aliases, mdi } from 'vuetify/iconsets/mdi-svg'
 import type { TargetMask } from '@shared/room'
 import VerdictStrip from '@/components/VerdictStrip.vue'
 
@@ -35,7 +36,7 @@ describe('VerdictStrip', () => {
           { centreHz: 1000, reverberationTimeS: 0.25, isReliable: true },
         ],
       },
-      global: { plugins: [createVuetify({ components, directives })] },
+      global: { plugins: [createVuetify({ components, directives, icons: { defaultSet: 'mdi', aliases, sets: { mdi } } })] },
     })
     const cells = wrapper.findAll('[data-testid="verdict-strip"] li')
     expect(cells.map((c) => c.attributes('data-verdict'))).toEqual(['too-live', 'inside'])

@@ -1,0 +1,44 @@
+import type { AnalysisDto, AnalysisListItemDto, CaptureDto } from '@shared/api'
+import type { AnalysisSettings } from '@shared/types/analysis'
+import { apiUrl, request, toQuery } from './http'
+import { uploadForm, type UploadOptions } from './upload'
+
+/** A capture as listed and shown: the DTO, with its mid-band headline once analysed. */
+export type CaptureListItem = CaptureDto
+
+export type ExportFormat = 'csv' | 'json'
+
+export function listCaptures(surveyId: number): Promise<CaptureListItem[]> {
+  return request<CaptureListItem[]>('GET', `/surveys/${surveyId}/captures`)
+}
+
+/** Multipart upload of one WAV (and optional reference sweep) with byte progress; 202 on success. */
+export function uploadCapture(surveyId: number, form: FormData, options?: UploadOptions): Promise<CaptureListItem> {
+  return uploadForm<CaptureListItem>(`/surveys/${surveyId}/captures`, form, options)
+}
+
+export function getCapture(captureId: number): Promise<CaptureListItem> {
+  return request<CaptureListItem>('GET', `/captures/${captureId}`)
+}
+
+export function deleteCapture(captureId: number): Promise<void> {
+  return request<void>('DELETE', `/captures/${captureId}`)
+}
+
+/** The latest analysis, or the one asked for; 404 `analysis-not-ready` until the worker is done. */
+export function getAnalysis(captureId: number, analysisId?: number): Promise<AnalysisDto> {
+  return request<AnalysisDto>('GET', `/captures/${captureId}/analysis${toQuery({ analysisId: analysisId?.toString() })}`)
+}
+
+export function listAnalyses(captureId: number): Promise<AnalysisListItemDto[]> {
+  return request<AnalysisListItemDto[]>('GET', `/captures/${captureId}/analyses`)
+}
+
+/** Queues a re-analysis with other settings; earlier analyses are kept. */
+export function requestAnalysis(captureId: number, settings: AnalysisSettings): Promise<unknown> {
+  return request<unknown>('POST', `/captures/${captureId}/analyses`, settings)
+}
+
+export function captureExportUrl(captureId: number, format: ExportFormat): string {
+  return apiUrl(`/captures/${captureId}/export${toQuery({ format })}`)
+}
