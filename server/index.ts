@@ -14,9 +14,11 @@ const { app, queue, close } = createApp({ config, sequelize, redis })
 
 // Captures accepted while Redis was down stay `uploaded`; queue them once it answers again.
 const REQUEUE_INTERVAL_MS = 10_000
-const requeueTimer = setInterval(() => {
+function requeuePass() {
   requeueUploadedCaptures(queue).catch((error: unknown) => logger.warn({ err: error }, 'requeue pass failed'))
-}, REQUEUE_INTERVAL_MS)
+}
+requeuePass()
+const requeueTimer = setInterval(requeuePass, REQUEUE_INTERVAL_MS)
 
 const server = app.listen(config.PORT, config.HOST, () => {
   logger.info(`Ringdown server listening on http://${config.HOST}:${config.PORT}/`)

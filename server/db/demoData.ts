@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize'
 import { Membership, Room, RoomShare, Survey, User, Workspace } from '../models'
 import { hashPassword } from '../services/authService'
+import { createDemoCaptures } from './demoCaptures'
 import type { Role } from '../../shared/api/common'
 
 /**
@@ -18,8 +19,11 @@ export const DEMO_ACCOUNTS: { email: string; name: string; role: Role }[] = [
 
 const DEMO_WORKSPACE = 'Demo Consultancy (invented)'
 
-/** Inserts the demo workspace once; running it again changes nothing. Returns whether it wrote. */
-export async function seedDemoData(sequelize: Sequelize): Promise<boolean> {
+/**
+ * Inserts the demo workspace once; running it again changes nothing. Returns whether it wrote.
+ * The demo captures are left `uploaded`: the server queues them at start and the worker analyses them.
+ */
+export async function seedDemoData(sequelize: Sequelize, options: { storageDir: string }): Promise<boolean> {
   if (await User.findOne({ where: { email: DEMO_ACCOUNTS[0]!.email } })) return false
   const passwordHash = await hashPassword(DEMO_PASSWORD)
   await sequelize.transaction(async (transaction) => {
@@ -66,14 +70,16 @@ export async function seedDemoData(sequelize: Sequelize): Promise<boolean> {
     )
     await RoomShare.create({ roomId: studio.id, userId: users.get('client')!.id }, { transaction })
     await RoomShare.create({ roomId: studio.id, userId: users.get('viewer')!.id }, { transaction })
-    await Survey.create(
+    const bare = await Survey.create(
       { roomId: studio.id, name: 'Bare room', measuredOn: '2026-09-14', temperatureC: 20.5, humidityPercent: 48, treatmentDescription: 'Empty apart from desk, chair and speakers on stands.' },
       { transaction },
     )
-    await Survey.create(
+    const treated = await Survey.create(
       { roomId: studio.id, name: 'After panels and bass traps', measuredOn: '2026-10-26', temperatureC: 19.0, humidityPercent: 52, treatmentDescription: 'Broadband panels at the first-reflection points, ceiling cloud, corner bass traps.' },
       { transaction },
     )
+    await createDemoCaptures(bare, 'bare', options.storageDir, transaction)
+    await createDemoCaptures(treated, 'treated', options.storageDir, transaction)
   })
   return true
 }

@@ -8,7 +8,7 @@ const config = loadConfig()
 const sequelize = createSequelize(config.DATABASE_URL)
 initModels(sequelize)
 try {
-  const wrote = await seedDemoData(sequelize)
+  const wrote = await seedDemoData(sequelize, { storageDir: config.STORAGE_DIR })
   console.log(wrote ? 'ringdown: demo data seeded' : 'ringdown: demo data already present')
 } catch (error) {
   console.error(`ringdown: seeding failed: ${(error as Error).message}`)

@@ -78,7 +78,7 @@ export function useCaptureAnalysis(captureId: Ref<number>) {
   }
 
   /** Shows the analysis with these settings, asking the worker for it first if there is none. */
-  async function useSettings(settings: AnalysisSettings): Promise<void> {
+  async function applySettings(settings: AnalysisSettings): Promise<void> {
     requestError.value = null
     const existing = analyses.value.find((item) => isSameAnalysisSettings(item.settings, settings))
     if (existing) {
@@ -109,5 +109,5 @@ export function useCaptureAnalysis(captureId: Ref<number>) {
   }, { immediate: true })
 
   const isWaiting = computed(() => waitingFor.value !== null || (analysis.value === null && capture.value !== null && capture.value.status !== 'failed'))
-  return { capture, analyses, analysis, error, requestError, isLoading, waitingFor, isWaiting, load, useSettings, select }
+  return { capture, analyses, analysis, error, requestError, isLoading, waitingFor, isWaiting, load, applySettings, select }
 }

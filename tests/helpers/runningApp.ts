@@ -19,7 +19,7 @@ export async function startRunningApp(): Promise<RunningApp> {
     throw new Error('Browser tests need the built client: run `npm run build` first (npm run test:all does).')
   }
   const services = await startTestServices()
-  await seedDemoData(services.sequelize)
+  await seedDemoData(services.sequelize, { storageDir: services.config.STORAGE_DIR })
   const ringdown = createApp({ ...services, clientDir })
   const server: Server = await new Promise((resolve) => {
     const listening = ringdown.app.listen(0, '127.0.0.1', () => resolve(listening))
