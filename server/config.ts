@@ -14,6 +14,9 @@ const envSchema = z.object({
   SECURE_COOKIES: z.enum(['0', '1']).default('0'),
   /** Largest accepted upload, MB. */
   UPLOAD_LIMIT_MB: z.coerce.number().positive().default(250),
+  /** BullMQ job lock and stalled-job check: how soon a killed worker's job is picked up again. */
+  WORKER_LOCK_DURATION_MS: z.coerce.number().int().min(500).default(30_000),
+  WORKER_STALLED_INTERVAL_MS: z.coerce.number().int().min(500).default(30_000),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })

@@ -17,6 +17,8 @@ const connection = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null })
 const worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir: config.STORAGE_DIR }), {
   connection,
   concurrency: 1,
+  lockDuration: config.WORKER_LOCK_DURATION_MS,
+  stalledInterval: config.WORKER_STALLED_INTERVAL_MS,
 })
 worker.on('ready', () => logger.info({ queue: ANALYSIS_QUEUE_NAME }, 'worker ready'))
 worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data.captureId }, 'analysis done'))
