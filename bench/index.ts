@@ -1,4 +1,5 @@
 import { resourceUsage } from 'node:process'
+import { execFileSync } from 'node:child_process'
 import { analyseCapture, DEFAULT_ANALYSIS_SETTINGS } from '../shared/acoustics/analyseCapture'
 import { deconvolveSweep } from '../shared/acoustics/sweep/deconvolveSweep'
 import { generateSweep } from '../shared/acoustics/sweep/generateSweep'
@@ -39,3 +40,9 @@ for (const result of results) {
   console.log(`${result.label.padEnd(width)}  ${result.medianMs.toFixed(0).padStart(9)}  ${result.minMs.toFixed(0).padStart(7)}  ${result.runs}`)
 }
 console.log(`peak memory (max RSS) after the impulse cases: ${impulseCasesPeakMb.toFixed(0)} MB; after the sweep cases: ${maxRssMb().toFixed(0)} MB`)
+
+// Peak memory of single analyses, each in its own process (the figure the 250 MB target is about).
+for (const [rate, seconds, bands] of [['48000', '10', 'octave'], ['48000', '10', 'third'], ['96000', '10', 'third']] as const) {
+  const peakMb = execFileSync(process.execPath, ['--import', 'tsx', 'bench/peakMemory.ts', rate, seconds, bands], { encoding: 'utf8' }).trim()
+  console.log(`peak memory (max RSS) of one ${seconds} s ${Number(rate) / 1000} kHz ${bands} analysis in a fresh process: ${peakMb} MB`)
+}
