@@ -18,6 +18,7 @@ import { roomsRouter } from './routes/roomsRouter'
 import { surveysRouter } from './routes/surveysRouter'
 import { capturesRouter } from './routes/capturesRouter'
 import { resultsRouter } from './routes/resultsRouter'
+import { roomModelRouter } from './routes/roomModelRouter'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
 import { errorHandler, notFoundHandler } from './middleware/errorHandler'
 import { checkHealth } from './services/healthService'
@@ -102,6 +103,7 @@ export function createApp({ config, sequelize, redis, clientDir = path.resolve('
   app.use('/api/rooms', roomsRouter())
   app.use('/api', capturesRouter({ storageDir: config.STORAGE_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB, queue }))
   app.use('/api', resultsRouter({ queue }))
+  app.use('/api', roomModelRouter())
   app.use('/api/surveys', surveysRouter())
   app.use('/api', notFoundHandler)
 

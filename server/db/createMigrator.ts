@@ -2,6 +2,7 @@ import { Umzug, SequelizeStorage } from 'umzug'
 import type { Sequelize } from 'sequelize'
 import * as initial from '../migrations/0001-initial'
 import * as analyses from '../migrations/0002-analyses'
+import * as roomModels from '../migrations/0003-room-models'
 
 /**
  * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
@@ -10,6 +11,7 @@ import * as analyses from '../migrations/0002-analyses'
 const MIGRATIONS = [
   { name: '0001-initial', module: initial },
   { name: '0002-analyses', module: analyses },
+  { name: '0003-room-models', module: roomModels },
 ]
 
 export function createMigrator(sequelize: Sequelize) {

@@ -8,15 +8,17 @@ import { Invitation } from './Invitation'
 import { Survey } from './Survey'
 import { Capture } from './Capture'
 import { Analysis } from './Analysis'
+import { RoomModel } from './RoomModel'
+import { CustomMaterial } from './CustomMaterial'
 
-export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis }
+export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial }
 
 let initialisedFor: Sequelize | null = null
 
 /** Initialises every model on one Sequelize instance and wires the associations (once). */
 export function initModels(sequelize: Sequelize): void {
   if (initialisedFor === sequelize) return
-  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis]) {
+  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial]) {
     model.initModel(sequelize)
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' })

@@ -1,7 +1,7 @@
 import request from 'supertest'
 import type { Express } from 'express'
 
-type Method = 'get' | 'post' | 'patch' | 'delete'
+type Method = 'get' | 'post' | 'patch' | 'put' | 'delete'
 
 /**
  * A supertest agent that keeps its session cookie and sends the CSRF token the server issued,
@@ -36,6 +36,9 @@ export class ApiAgent {
   }
   patch(url: string, body?: unknown) {
     return this.send('patch', url, body ?? {})
+  }
+  put(url: string, body?: unknown) {
+    return this.send('put', url, body ?? {})
   }
   delete(url: string) {
     return this.send('delete', url)

@@ -1,4 +1,4 @@
-import { Membership, Room, RoomShare, Survey, User, Workspace } from '../../server/models'
+import { Capture, Membership, Room, RoomShare, Survey, User, Workspace } from '../../server/models'
 import { hashPassword } from '../../server/services/authService'
 import type { Role } from '../../shared/api/common'
 
@@ -12,6 +12,8 @@ export interface WorkspaceFixture {
   privateRoom: Room
   sharedSurvey: Survey
   privateSurvey: Survey
+  /** A capture row in the shared survey (no file behind it: for access checks only). */
+  sharedCapture: Capture
 }
 
 /** A workspace with one member per role, two rooms and a survey in each. */
@@ -30,5 +32,11 @@ export async function createWorkspaceFixture(label: string): Promise<WorkspaceFi
   const privateRoom = await room(`${label} private room`)
   for (const role of ['client', 'viewer'] as const) await RoomShare.create({ roomId: sharedRoom.id, userId: users[role].id })
   const survey = (roomId: number) => Survey.create({ roomId, name: 'Bare room', measuredOn: '2026-01-10', temperatureC: 20, humidityPercent: 50 })
-  return { workspace, users, sharedRoom, privateRoom, sharedSurvey: await survey(sharedRoom.id), privateSurvey: await survey(privateRoom.id) }
+  const sharedSurvey = await survey(sharedRoom.id)
+  const sharedCapture = await Capture.create({
+    surveyId: sharedSurvey.id, uploadedById: users.engineer.id, kind: 'impulse', positionXM: null, positionYM: null, positionZM: null,
+    sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256: null, originalName: 'fixture.wav', sha256: '0'.repeat(64),
+    byteSize: 0, sampleRateHz: 48_000, bitDepth: 24, channelCount: 1, durationS: 1, status: 'done', statusMessage: null,
+  })
+  return { workspace, users, sharedRoom, privateRoom, sharedSurvey, privateSurvey: await survey(privateRoom.id), sharedCapture }
 }

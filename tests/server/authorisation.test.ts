@@ -28,6 +28,9 @@ afterAll(async () => {
 
 const validRoom = { name: 'Intruder room', use: 'other', lengthM: 3, widthM: 3, heightM: 2.4 }
 const validSurvey = { name: 'Intruder survey', measuredOn: '2026-02-02' }
+const validLayout = { speakers: [{ label: 'Left', xM: 1, yM: 1, zM: 1.2 }], listener: { xM: 2, yM: 2, zM: 1.2 } }
+const validTreatment = { surfaceMaterials: { floor: 'hard-surface', ceiling: 'hard-surface', walls: 'hard-surface' } }
+const validMaterial = { name: 'Intruder foam', coefficients: [null, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, null], source: 'made up' }
 
 /** Every route, aimed at workspace B's records. */
 function routesIntoB() {
@@ -49,6 +52,24 @@ function routesIntoB() {
     ['get', `/api/surveys/${b.sharedSurvey.id}`],
     ['patch', `/api/surveys/${b.sharedSurvey.id}`, { name: 'Taken over' }],
     ['delete', `/api/surveys/${b.sharedSurvey.id}`],
+    ['get', `/api/surveys/${b.sharedSurvey.id}/captures`],
+    ['post', `/api/surveys/${b.sharedSurvey.id}/captures`, { kind: 'impulse' }],
+    ['get', `/api/surveys/${b.sharedSurvey.id}/summary`],
+    ['get', `/api/surveys/${b.sharedSurvey.id}/export?format=csv`],
+    ['get', `/api/captures/${b.sharedCapture.id}`],
+    ['delete', `/api/captures/${b.sharedCapture.id}`],
+    ['get', `/api/captures/${b.sharedCapture.id}/analysis`],
+    ['get', `/api/captures/${b.sharedCapture.id}/analyses`],
+    ['post', `/api/captures/${b.sharedCapture.id}/analyses`, { bands: 'third', smoothing: 3, channel: 0, gateMs: null, timeReversedFiltering: true }],
+    ['get', `/api/captures/${b.sharedCapture.id}/export?format=json`],
+    ['get', `/api/rooms/${b.sharedRoom.id}/comparison?surveys=${b.sharedSurvey.id},${b.privateSurvey.id}`],
+    ['get', `/api/rooms/${b.sharedRoom.id}/comparison/export?surveys=${b.sharedSurvey.id},${b.privateSurvey.id}&format=csv`],
+    ['get', `/api/rooms/${b.sharedRoom.id}/model`],
+    ['put', `/api/rooms/${b.sharedRoom.id}/model/layout`, validLayout],
+    ['put', `/api/rooms/${b.sharedRoom.id}/model/treatment`, validTreatment],
+    ['get', `/api/workspaces/${b.workspace.id}/materials`],
+    ['post', `/api/workspaces/${b.workspace.id}/materials`, validMaterial],
+    ['delete', `/api/workspaces/${b.workspace.id}/materials/1`],
   ] as const
 }
 

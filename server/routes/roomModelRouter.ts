@@ -1,0 +1,23 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import * as roomModel from '../controllers/roomModelController'
+import { validate } from '../middleware/validate'
+import { requireAuth } from '../middleware/requireAuth'
+import { idParam } from '../../shared/api/common'
+import { customMaterialBodySchema, layoutBodySchema, treatmentBodySchema } from '../../shared/api/roomModel'
+
+const roomParams = z.object({ roomId: idParam })
+const workspaceParams = z.object({ workspaceId: idParam })
+const materialParams = z.object({ workspaceId: idParam, materialId: idParam })
+
+/** The room model's saved inputs (layout, treatment plan) and the workspace material library. */
+export function roomModelRouter() {
+  const router = Router()
+  router.get('/rooms/:roomId/model', requireAuth, validate({ params: roomParams }), roomModel.show)
+  router.put('/rooms/:roomId/model/layout', requireAuth, validate({ params: roomParams, body: layoutBodySchema }), roomModel.saveLayout)
+  router.put('/rooms/:roomId/model/treatment', requireAuth, validate({ params: roomParams, body: treatmentBodySchema }), roomModel.saveTreatment)
+  router.get('/workspaces/:workspaceId/materials', requireAuth, validate({ params: workspaceParams }), roomModel.listMaterials)
+  router.post('/workspaces/:workspaceId/materials', requireAuth, validate({ params: workspaceParams, body: customMaterialBodySchema }), roomModel.createMaterial)
+  router.delete('/workspaces/:workspaceId/materials/:materialId', requireAuth, validate({ params: materialParams }), roomModel.deleteMaterial)
+  return router
+}
