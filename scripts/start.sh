@@ -9,7 +9,7 @@ source scripts/lib/services.sh
 export RINGDOWN_DATA_DIR="${RINGDOWN_DATA_DIR:-$PWD/.data}"
 export PG_PORT="${PG_PORT:-55432}" REDIS_PORT="${REDIS_PORT:-56379}" PORT="${PORT:-3000}"
 export REDIS_PERSIST=yes NODE_ENV=production
-export STORAGE_DIR="${STORAGE_DIR:-$RINGDOWN_DATA_DIR/files}"
+export STORAGE_DIR="${STORAGE_DIR:-$RINGDOWN_DATA_DIR/files}" MAIL_DIR="${MAIL_DIR:-$RINGDOWN_DATA_DIR/mail}"
 mkdir -p "$RINGDOWN_DATA_DIR" "$STORAGE_DIR"
 if [ ! -s "$RINGDOWN_DATA_DIR/session-secret" ]; then
   (umask 077; head -c 32 /dev/urandom | base64 > "$RINGDOWN_DATA_DIR/session-secret")

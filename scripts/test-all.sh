@@ -14,7 +14,7 @@ ensure_node_modules
 export RINGDOWN_DATA_DIR="$(mktemp -d /tmp/ringdown-test.XXXXXX)"
 chmod 755 "$RINGDOWN_DATA_DIR"
 export PG_PORT="${TEST_PG_PORT:-55433}" REDIS_PORT="${TEST_REDIS_PORT:-56380}" REDIS_PERSIST=no
-export STORAGE_DIR="$RINGDOWN_DATA_DIR/files" NODE_ENV=test SESSION_SECRET="test-secret-$RANDOM$RANDOM"
+export STORAGE_DIR="$RINGDOWN_DATA_DIR/files" MAIL_DIR="$RINGDOWN_DATA_DIR/mail" NODE_ENV=test SESSION_SECRET="test-secret-$RANDOM$RANDOM"
 unset DATABASE_URL REDIS_URL
 cleanup() { stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
 trap cleanup EXIT

@@ -19,10 +19,14 @@ import { surveysRouter } from './routes/surveysRouter'
 import { capturesRouter } from './routes/capturesRouter'
 import { resultsRouter } from './routes/resultsRouter'
 import { roomModelRouter } from './routes/roomModelRouter'
+import { invitationsRouter } from './routes/invitationsRouter'
+import { createSmtpMailer, type Mailer } from './mail/mailer'
+import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
 import { errorHandler, notFoundHandler } from './middleware/errorHandler'
 import { checkHealth } from './services/healthService'
 import { initModels } from './models'
+import { NotFoundError } from './errors'
 
 export interface AppDependencies {
   config: AppConfig
@@ -32,9 +36,15 @@ export interface AppDependencies {
   clientDir?: string
   /** Defaults to a BullMQ queue on `redis`. */
   queue?: AnalysisQueue
+  /** Defaults to SMTP_URL, else the local fake inbox on FAKE_SMTP_PORT. */
+  mailer?: Mailer
 }
 
 export const APP_VERSION = '0.1.0'
+
+function isLoopback(address: string): boolean {
+  return address === 'localhost' || address === '::1' || address.startsWith('127.') || address.startsWith('::ffff:127.')
+}
 
 export interface RingdownApp {
   app: Express
@@ -43,8 +53,16 @@ export interface RingdownApp {
   close: () => Promise<void>
 }
 
-export function createApp({ config, sequelize, redis, clientDir = path.resolve('dist'), queue = createAnalysisQueue(redis) }: AppDependencies): RingdownApp {
+export function createApp({
+  config,
+  sequelize,
+  redis,
+  clientDir = path.resolve('dist'),
+  queue = createAnalysisQueue(redis),
+  mailer = createSmtpMailer(config.SMTP_URL ?? `smtp://127.0.0.1:${config.FAKE_SMTP_PORT}`, config.MAIL_FROM),
+}: AppDependencies): RingdownApp {
   initModels(sequelize)
+  const mail = { mailer, publicUrl: config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}` }
   const app = express()
   const isSecure = config.SECURE_COOKIES === '1'
   if (config.TRUST_PROXY === '1') app.set('trust proxy', 1)
@@ -97,13 +115,22 @@ export function createApp({ config, sequelize, redis, clientDir = path.resolve('
   app.use('/api', csrfSynchronisedProtection)
   app.use(
     '/api/auth',
-    authRouter({ sequelize, signInLimitPerWindow: config.SIGN_IN_RATE_LIMIT, generateCsrfToken: (req) => generateToken(req as express.Request) }),
+    authRouter({ sequelize, signInLimitPerWindow: config.SIGN_IN_RATE_LIMIT, generateCsrfToken: (req) => generateToken(req as express.Request), mail }),
   )
   app.use('/api/workspaces', workspacesRouter())
   app.use('/api/rooms', roomsRouter())
   app.use('/api', capturesRouter({ storageDir: config.STORAGE_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB, queue }))
   app.use('/api', resultsRouter({ queue }))
   app.use('/api', roomModelRouter())
+  app.use('/api', invitationsRouter(mail))
+  if (!config.SMTP_URL && isLoopback(config.HOST)) {
+    // The development mailbox: only while mail goes to the local fake inbox, the server listens on
+    // loopback and the request comes from this machine (it shows reset links, so never further).
+    app.get('/api/dev/mailbox', async (req, res) => {
+      if (!isLoopback(req.socket.remoteAddress ?? '')) throw new NotFoundError('That API route')
+      res.json(await readFakeInbox(config.MAIL_DIR))
+    })
+  }
   app.use('/api/surveys', surveysRouter())
   app.use('/api', notFoundHandler)
 
@@ -112,5 +139,5 @@ export function createApp({ config, sequelize, redis, clientDir = path.resolve('
     app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
   }
   app.use(errorHandler)
-  return { app, queue, close: async () => { await Promise.allSettled([sessionPool.end(), queue.close()]) } }
+  return { app, queue, close: async () => { mailer.close(); await Promise.allSettled([sessionPool.end(), queue.close()]) } }
 }

@@ -17,6 +17,14 @@ const envSchema = z.object({
   /** BullMQ job lock and stalled-job check: how soon a killed worker's job is picked up again. */
   WORKER_LOCK_DURATION_MS: z.coerce.number().int().min(500).default(30_000),
   WORKER_STALLED_INTERVAL_MS: z.coerce.number().int().min(500).default(30_000),
+  /** Real SMTP server for outgoing mail; without it mail goes to the local fake inbox (MAIL_DIR). */
+  SMTP_URL: z.string().optional(),
+  MAIL_FROM: z.string().default('Ringdown <no-reply@ringdown.invalid>'),
+  MAIL_DIR: z.string().default('.data/mail'),
+  /** Loopback port of the fake SMTP inbox the server starts when SMTP_URL is not set. */
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(56025),
+  /** The address people reach the product at, for links in e-mails; default http://HOST:PORT. */
+  PUBLIC_URL: z.string().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })

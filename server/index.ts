@@ -4,12 +4,16 @@ import { createSequelize } from './db/createSequelize'
 import { createApp } from './app'
 import { logger } from './logger'
 import { requeueUploadedCaptures } from './services/capturesService'
+import { startFakeSmtpInbox } from './mail/fakeSmtpInbox'
 
 // The only file that listens. Stops accepting connections on SIGTERM/SIGINT, then closes pools.
 const config = loadConfig()
 const sequelize = createSequelize(config.DATABASE_URL)
 const redis = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null, lazyConnect: false })
 redis.on('error', (error) => logger.warn({ err: error }, 'redis connection problem'))
+// Without SMTP_URL, mail goes to a local fake inbox (files in MAIL_DIR, shown at /api/dev/mailbox).
+const fakeInbox = config.SMTP_URL ? null : await startFakeSmtpInbox({ port: config.FAKE_SMTP_PORT, mailDir: config.MAIL_DIR })
+if (fakeInbox) logger.info(`fake SMTP inbox on 127.0.0.1:${fakeInbox.port}, messages in ${config.MAIL_DIR}`)
 const { app, queue, close } = createApp({ config, sequelize, redis })
 
 // Captures accepted while Redis was down stay `uploaded`; queue them once it answers again.
@@ -32,7 +36,7 @@ async function shutdown(signal: string) {
   clearInterval(requeueTimer)
   server.close()
   server.closeAllConnections()
-  await Promise.allSettled([close(), sequelize.close(), redis.quit()])
+  await Promise.allSettled([close(), sequelize.close(), redis.quit(), fakeInbox?.close()])
   process.exit(0)
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'))

@@ -5,6 +5,9 @@ import { describeUser, registerUser } from '../services/authService'
 import { HttpError, UnauthenticatedError } from '../errors'
 import { currentUserId } from '../middleware/requireAuth'
 import type { RegisterBody } from '../../shared/api/auth'
+import { acceptInvitation, previewInvitation, type MailContext } from '../services/invitationsService'
+import { requestPasswordReset as sendResetLink, resetPassword as applyReset } from '../services/passwordResetService'
+import { ForbiddenError } from '../errors'
 
 function logIn(req: Request, user: Express.User): Promise<void> {
   // passport ≥ 0.6 regenerates the session id here (session fixation).
@@ -30,9 +33,29 @@ export function signIn(req: Request, res: Response, next: NextFunction) {
 
 export function register(sequelize: Sequelize) {
   return async (req: Request, res: Response) => {
-    const user = await registerUser(sequelize, req.body as RegisterBody)
+    const body = req.body as RegisterBody
+    if (body.invitationToken) {
+      const invitation = await previewInvitation(body.invitationToken)
+      if (invitation.email !== body.email) throw new ForbiddenError(`This invitation is for ${invitation.email}. Register with that address.`, 'invitation-other-email')
+    }
+    const user = await registerUser(sequelize, body)
+    if (body.invitationToken) await acceptInvitation(user.id, body.invitationToken)
     await logIn(req, { id: user.id })
     res.status(201).json(await describeUser(user.id))
+  }
+}
+
+export function requestPasswordReset(mail: MailContext) {
+  return async (req: Request, res: Response) => {
+    await sendResetLink((req.body as { email: string }).email, mail)
+    res.status(202).json({ message: 'If an account uses that address, a reset link is on its way.' })
+  }
+}
+
+export function resetPassword(sequelize: Sequelize) {
+  return async (req: Request, res: Response) => {
+    await applyReset(sequelize, (req.params as { token: string }).token, (req.body as { password: string }).password)
+    res.status(204).end()
   }
 }
 

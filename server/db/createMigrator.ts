@@ -3,6 +3,7 @@ import type { Sequelize } from 'sequelize'
 import * as initial from '../migrations/0001-initial'
 import * as analyses from '../migrations/0002-analyses'
 import * as roomModels from '../migrations/0003-room-models'
+import * as invitationsSharesActivity from '../migrations/0004-invitations-shares-activity'
 
 /**
  * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
@@ -12,6 +13,7 @@ const MIGRATIONS = [
   { name: '0001-initial', module: initial },
   { name: '0002-analyses', module: analyses },
   { name: '0003-room-models', module: roomModels },
+  { name: '0004-invitations-shares-activity', module: invitationsSharesActivity },
 ]
 
 export function createMigrator(sequelize: Sequelize) {

@@ -10,15 +10,18 @@ import { Capture } from './Capture'
 import { Analysis } from './Analysis'
 import { RoomModel } from './RoomModel'
 import { CustomMaterial } from './CustomMaterial'
+import { PasswordReset } from './PasswordReset'
+import { ShareLink } from './ShareLink'
+import { Activity } from './Activity'
 
-export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial }
+export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity }
 
 let initialisedFor: Sequelize | null = null
 
 /** Initialises every model on one Sequelize instance and wires the associations (once). */
 export function initModels(sequelize: Sequelize): void {
   if (initialisedFor === sequelize) return
-  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial]) {
+  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity]) {
     model.initModel(sequelize)
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' })
@@ -36,6 +39,7 @@ export function initModels(sequelize: Sequelize): void {
   Capture.belongsTo(Survey, { foreignKey: 'surveyId', as: 'survey' })
   Capture.hasMany(Analysis, { foreignKey: 'captureId', as: 'analyses' })
   Analysis.belongsTo(Capture, { foreignKey: 'captureId', as: 'capture' })
+  Activity.belongsTo(User, { foreignKey: 'userId', as: 'user' })
   Workspace.hasMany(Invitation, { foreignKey: 'workspaceId', as: 'invitations' })
   initialisedFor = sequelize
 }

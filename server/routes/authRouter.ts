@@ -5,9 +5,12 @@ import * as auth from '../controllers/authController'
 import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { registerBodySchema, signInBodySchema } from '../../shared/api/auth'
+import { passwordResetBodySchema, passwordResetRequestSchema } from '../../shared/api/invitations'
+import { z } from 'zod'
+import type { MailContext } from '../services/invitationsService'
 import { HttpError } from '../errors'
 
-export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow: number; generateCsrfToken: (req: Express.Request) => string }) {
+export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow: number; generateCsrfToken: (req: Express.Request) => string; mail: MailContext }) {
   const router = Router()
   // Per address and account: slows password guessing without locking out a whole office.
   const signInLimiter = rateLimit({
@@ -27,5 +30,12 @@ export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow
   router.post('/sign-in', signInLimiter, validate({ body: signInBodySchema }), auth.signIn)
   router.post('/register', signInLimiter, validate({ body: registerBodySchema }), auth.register(options.sequelize))
   router.post('/sign-out', requireAuth, auth.signOut)
+  router.post('/password-reset', signInLimiter, validate({ body: passwordResetRequestSchema }), auth.requestPasswordReset(options.mail))
+  router.post(
+    '/password-reset/:token',
+    signInLimiter,
+    validate({ params: z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'That reset link is not valid.') }), body: passwordResetBodySchema }),
+    auth.resetPassword(options.sequelize),
+  )
   return router
 }

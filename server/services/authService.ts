@@ -40,13 +40,17 @@ export async function verifyCredentials(email: string, password: string): Promis
   return (await bcrypt.compare(password, user.passwordHash)) ? user : null
 }
 
-/** Creates a user and a workspace they own, in one transaction. */
+/**
+ * Creates a user and a workspace they own, in one transaction. With an invitation token the user
+ * is created without a workspace of their own; the caller then accepts the invitation.
+ */
 export async function registerUser(sequelize: Sequelize, body: RegisterBody): Promise<User> {
   const existing = await User.findOne({ where: { email: body.email } })
   if (existing) throw new ConflictError('email-taken', 'An account with this e-mail already exists. Sign in instead.')
   const passwordHash = await hashPassword(body.password)
   return sequelize.transaction(async (transaction) => {
     const user = await User.create({ name: body.name, email: body.email, passwordHash }, { transaction })
+    if (body.invitationToken) return user
     const workspace = await Workspace.create({ name: body.workspaceName }, { transaction })
     await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' }, { transaction })
     return user

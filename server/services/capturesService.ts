@@ -14,6 +14,7 @@ import type { AnalysisResult } from '../../shared/types/analysis'
 import { latestAnalysesByCapture } from './analysisLookup'
 import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../worker/analysisSettings'
 import { logger } from '../logger'
+import { recordActivity } from './activityService'
 
 export interface UploadedFile {
   path: string
@@ -86,7 +87,7 @@ export async function createCapture(
 ): Promise<CaptureDto> {
   const newlyStored: string[] = []
   try {
-    await assertMayAddCapture(userId, surveyId)
+    const { room } = await requireSurveyAccess(userId, surveyId, 'capture:create')
     if (!files.file) throw new ValidationError('Choose a WAV file to upload.', { file: 'Choose a WAV file to upload.' })
     if (files.file.size === 0) throw new ValidationError('The file is empty.', { file: 'The file is empty.' })
     const hasSweepParameters = fields.sweepF1Hz !== null && fields.sweepF2Hz !== null && fields.sweepDurationS !== null
@@ -121,6 +122,7 @@ export async function createCapture(
     })
     newlyStored.length = 0
     await enqueueCapture(capture, context.queue)
+    await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.uploaded', summary: `uploaded ${capture.originalName} (${capture.receiverLabel || 'no position label'})` })
     return toCaptureDto(capture)
   } catch (error) {
     await Promise.all(newlyStored.map((sha) => rm(contentPath(context.storageDir, sha), { force: true })))
@@ -189,11 +191,12 @@ export async function getCapture(userId: number, captureId: number): Promise<Cap
 
 /** Owners and engineers delete any capture; a client only the ones they uploaded. */
 export async function deleteCapture(userId: number, captureId: number, storageDir: string): Promise<void> {
-  const { capture, role, isShared } = await requireCaptureAccess(userId, captureId)
+  const { capture, role, isShared, room } = await requireCaptureAccess(userId, captureId)
   const mayDeleteAny = mayOnRoom(role, isShared, 'capture:delete-any')
   const mayDeleteOwn = mayOnRoom(role, isShared, 'capture:create') && capture.uploadedById === userId
   if (!mayDeleteAny && !mayDeleteOwn) throw new ForbiddenError('You may delete only captures you uploaded.')
   await capture.destroy()
+  await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.deleted', summary: `deleted ${capture.originalName}` })
   const stillUsed = await Capture.count({ where: { sha256: capture.sha256 } })
   if (stillUsed === 0) await rm(contentPath(storageDir, capture.sha256), { force: true })
 }

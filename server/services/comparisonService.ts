@@ -9,7 +9,7 @@ import type { ComparisonDifference, ComparisonDto, SurveySummaryDto } from '../.
 import type { BandResolution } from '../../shared/types/analysis'
 import type { Room } from '../models'
 import { summariseSurvey } from './surveySummaryService'
-import { getSurvey } from './surveysService'
+import { describeSurvey } from './surveysService'
 
 function roomVolume(room: Room): number | null {
   if (room.volumeM3 !== null) return room.volumeM3
@@ -45,7 +45,12 @@ function differencesOf(before: MeasuredBand[], after: MeasuredBand[]): Compariso
 /** Two or more surveys of one room side by side, judged against the room's target. */
 export async function compareSurveys(userId: number, roomId: number, surveyIds: number[], bands: BandResolution): Promise<ComparisonDto> {
   const { room } = await requireRoomAccess(userId, roomId, 'room:read')
-  const surveys = await Survey.findAll({ where: { id: surveyIds, roomId } })
+  return compareSurveysOfRoom(room, surveyIds, bands)
+}
+
+/** The comparison itself, for a room the caller is already allowed to see (or a share link). */
+export async function compareSurveysOfRoom(room: Room, surveyIds: number[], bands: BandResolution): Promise<ComparisonDto> {
+  const surveys = await Survey.findAll({ where: { id: surveyIds, roomId: room.id } })
   if (surveys.length !== new Set(surveyIds).size) {
     throw new ValidationError('Every survey compared must belong to this room.', { surveys: 'Every survey compared must belong to this room.' })
   }
@@ -54,7 +59,7 @@ export async function compareSurveys(userId: number, roomId: number, surveyIds: 
   const target = targetOf(room, volumeM3, bands)
   const entries = []
   for (const survey of ordered) {
-    const summary = { survey: await getSurvey(userId, survey.id), ...(await summariseSurvey(survey, bands)) }
+    const summary = { survey: await describeSurvey(survey), ...(await summariseSurvey(survey, bands)) }
     entries.push({ summary, verdicts: target ? bandVerdicts(toMeasured(summary), target) : [] })
   }
   const before = toMeasured(entries[0]!.summary)

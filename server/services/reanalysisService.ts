@@ -5,6 +5,7 @@ import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { AnalysisListItemDto } from '../../shared/api/results'
 import type { AnalysisSettings } from '../../shared/types/analysis'
 import { keyToSettings, settingsToKey } from '../../worker/analysisSettings'
+import { recordActivity } from './activityService'
 
 async function requireCapture(userId: number, captureId: number, action: 'room:read' | 'capture:create') {
   const capture = await Capture.findByPk(captureId, { include: [{ association: 'survey' }] })
@@ -43,5 +44,7 @@ export async function requestReanalysis(userId: number, captureId: number, setti
   if (await Analysis.findOne({ where: { captureId, settingsKey }, attributes: ['id'] })) return { captureId, settingsKey, status: 'exists' }
   await queue.enqueue({ captureId, settingsKey })
   await capture.update({ status: 'queued', statusMessage: 'Re-analysis waiting for a worker' })
+  const { room } = await requireRoomAccess(userId, (capture as Capture & { survey?: { roomId: number } }).survey!.roomId, 'room:read')
+  await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.reanalysed', summary: `re-analysed ${capture.originalName} (${settings.bands} bands, 1/${settings.smoothing} octave smoothing)` })
   return { captureId, settingsKey, status: 'queued' }
 }

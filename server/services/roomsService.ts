@@ -4,6 +4,7 @@ import { requireRoomAccess, requireWorkspaceRole, roomPermissions } from '../pol
 import { mayInWorkspace } from '../policy/policy'
 import { requireMembershipRole } from './membershipLookup'
 import { ValidationError } from '../errors'
+import { recordActivity } from './activityService'
 import type { CreateRoomBody, RoomDto, UpdateRoomBody } from '../../shared/api/rooms'
 import type { Role } from '../../shared/api/common'
 
@@ -67,6 +68,7 @@ export async function listRooms(userId: number, workspaceId: number, search?: st
 export async function createRoom(userId: number, workspaceId: number, body: CreateRoomBody): Promise<RoomDto> {
   const role = await requireWorkspaceRole(userId, workspaceId, 'room:create')
   const room = await Room.create({ ...body, workspaceId })
+  await recordActivity({ workspaceId, roomId: room.id, userId, action: 'room.created', summary: `created the room "${room.name}"` })
   return toRoomDto(room, role, false)
 }
 
@@ -89,4 +91,5 @@ export async function updateRoom(userId: number, roomId: number, body: UpdateRoo
 export async function deleteRoom(userId: number, roomId: number): Promise<void> {
   const { room } = await requireRoomAccess(userId, roomId, 'room:delete')
   await room.destroy()
+  await recordActivity({ workspaceId: room.workspaceId, roomId: null, userId, action: 'room.deleted', summary: `deleted the room "${room.name}"` })
 }

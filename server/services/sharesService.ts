@@ -2,6 +2,7 @@ import { Membership, RoomShare, User } from '../models'
 import { ConflictError, NotFoundError } from '../errors'
 import { requireRoomAccess } from '../policy/roomAccess'
 import type { RoomShareDto, ShareRoomBody } from '../../shared/api/rooms'
+import { recordActivity } from './activityService'
 
 export async function listShares(userId: number, roomId: number): Promise<RoomShareDto[]> {
   const { room } = await requireRoomAccess(userId, roomId, 'room:share')
@@ -27,11 +28,13 @@ export async function shareRoom(userId: number, roomId: number, body: ShareRoomB
   }
   const [, created] = await RoomShare.findOrCreate({ where: { roomId, userId: user.id } })
   if (!created) throw new ConflictError('already-shared', 'The room is already shared with that person.')
+  await recordActivity({ workspaceId: room.workspaceId, roomId, userId, action: 'room.shared', summary: `shared the room with ${user.email} (${membership.role})` })
   return { userId: user.id, name: user.name, email: user.email, role: membership.role }
 }
 
 export async function unshareRoom(userId: number, roomId: number, targetUserId: number): Promise<void> {
-  await requireRoomAccess(userId, roomId, 'room:share')
+  const { room } = await requireRoomAccess(userId, roomId, 'room:share')
   const removed = await RoomShare.destroy({ where: { roomId, userId: targetUserId } })
   if (removed === 0) throw new NotFoundError('That share')
+  await recordActivity({ workspaceId: room.workspaceId, roomId, userId, action: 'room.unshared', summary: 'stopped sharing the room with a member' })
 }

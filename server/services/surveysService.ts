@@ -4,6 +4,7 @@ import { NotFoundError } from '../errors'
 import { requireRoomAccess } from '../policy/roomAccess'
 import type { RoomAction } from '../policy/policy'
 import type { CreateSurveyBody, SurveyDto, UpdateSurveyBody } from '../../shared/api/surveys'
+import { recordActivity } from './activityService'
 
 function toSurveyDto(survey: Survey, captureCount: number): SurveyDto {
   return {
@@ -52,14 +53,20 @@ export async function listSurveys(userId: number, roomId: number): Promise<Surve
 }
 
 export async function createSurvey(userId: number, roomId: number, body: CreateSurveyBody): Promise<SurveyDto> {
-  await requireRoomAccess(userId, roomId, 'survey:create')
+  const { room } = await requireRoomAccess(userId, roomId, 'survey:create')
   const survey = await Survey.create({ ...body, roomId })
+  await recordActivity({ workspaceId: room.workspaceId, roomId, userId, action: 'survey.created', summary: `added the survey "${survey.name}"` })
   return toSurveyDto(survey, 0)
+}
+
+/** The DTO of a survey already authorised by the caller. */
+export async function describeSurvey(survey: Survey): Promise<SurveyDto> {
+  return toSurveyDto(survey, (await captureCounts([survey.id])).get(survey.id) ?? 0)
 }
 
 export async function getSurvey(userId: number, surveyId: number): Promise<SurveyDto> {
   const { survey } = await requireSurveyAccess(userId, surveyId, 'room:read')
-  return toSurveyDto(survey, (await captureCounts([survey.id])).get(survey.id) ?? 0)
+  return describeSurvey(survey)
 }
 
 export async function updateSurvey(userId: number, surveyId: number, body: UpdateSurveyBody): Promise<SurveyDto> {
@@ -69,6 +76,7 @@ export async function updateSurvey(userId: number, surveyId: number, body: Updat
 }
 
 export async function deleteSurvey(userId: number, surveyId: number): Promise<void> {
-  const { survey } = await requireSurveyAccess(userId, surveyId, 'survey:delete')
+  const { survey, room } = await requireSurveyAccess(userId, surveyId, 'survey:delete')
   await survey.destroy()
+  await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'survey.deleted', summary: `deleted the survey "${survey.name}" and its captures` })
 }

@@ -11,8 +11,10 @@ export const registerBodySchema = z.object({
   name: z.string().trim().min(1, 'Enter your name.').max(120),
   email: z.email('Enter a valid e-mail address.').trim().toLowerCase(),
   password: z.string().min(10, 'Use at least 10 characters.').max(200),
-  workspaceName: z.string().trim().min(1, 'Name your workspace.').max(120),
-})
+  workspaceName: z.string().trim().max(120).default(''),
+  /** Registering from an invitation joins that workspace instead of creating one. */
+  invitationToken: z.string().trim().min(20).max(100).optional(),
+}).refine((body) => body.invitationToken !== undefined || body.workspaceName.length > 0, { message: 'Name your workspace.', path: ['workspaceName'] })
 export type RegisterBody = z.infer<typeof registerBodySchema>
 
 export interface UserDto {

@@ -34,7 +34,11 @@ export function useCaptureAnalysis(captureId: Ref<number>) {
     if (id !== captureId.value) return false
     capture.value = loaded
     analyses.value = list
-    if (loaded.status === 'failed') return false
+    if (loaded.status === 'failed') {
+      // The worker gave up (its message is on the capture): stop waiting for the re-analysis too.
+      waitingFor.value = null
+      return false
+    }
     const wanted = waitingFor.value
     if (wanted) {
       const match = list.find((item) => isSameAnalysisSettings(item.settings, wanted))

@@ -6,6 +6,8 @@ import type { RoomModeMark } from '@/components/charts/waterfallOption'
 import { useRoomsStore } from '@/stores/rooms'
 import { useAsyncState } from './useAsyncState'
 
+const MAX_MODE_HZ = 150
+
 /** The survey and room a capture belongs to, and the room's axial modes for the waterfall. */
 export function useCaptureContext(capture: Ref<CaptureListItem | null>) {
   const roomsStore = useRoomsStore()
@@ -24,7 +26,8 @@ export function useCaptureContext(capture: Ref<CaptureListItem | null>) {
     const r = room.value
     if (!r || r.lengthM === null || r.widthM === null || r.heightM === null) return []
     const speed = speedOfSoundMps(survey.value?.temperatureC ?? 20)
-    return roomModes({ lengthM: r.lengthM, widthM: r.widthM, heightM: r.heightM }, { speedOfSoundMps: speed, maxHz: 300 })
+    // Axial modes up to 150 Hz: the ones that ring longest in a small room; more would crowd the view.
+    return roomModes({ lengthM: r.lengthM, widthM: r.widthM, heightM: r.heightM }, { speedOfSoundMps: speed, maxHz: MAX_MODE_HZ })
       .filter((mode) => mode.type === 'axial')
       .map((mode) => ({ frequencyHz: mode.frequencyHz, label: `${mode.indices.join(',')} · ${mode.frequencyHz.toFixed(0)} Hz` }))
   })

@@ -16,7 +16,7 @@ export interface RingingFrequency {
   fallMs: number | null
 }
 
-/** The frequency of the waterfall that takes longest to fall 20 dB (ties: the lower frequency). */
+/** The frequency of the waterfall that takes longest to fall 20 dB; among those that never do, the one that falls least (ties: the lower frequency). */
 export function longestRinging(data: WaterfallData): RingingFrequency | null {
   const first = data.levelDb[0]
   if (!first || data.timeMs.length < 2) return null
@@ -27,7 +27,9 @@ export function longestRinging(data: WaterfallData): RingingFrequency | null {
     if (!Number.isFinite(startDb) || startDb < SIGNIFICANT_DB) return
     const slice = data.levelDb.findIndex((levels) => (levels[f] as number) <= startDb - FALL_DB)
     const fallMs = slice < 0 ? null : (data.timeMs[slice] as number)
-    const rankMs = fallMs ?? Infinity
+    // Frequencies that never fall 20 dB in the view rank above all others, least fall first.
+    const lastDb = data.levelDb[data.levelDb.length - 1]?.[f] as number
+    const rankMs = fallMs ?? 1e9 - (startDb - lastDb)
     if (rankMs > bestMs) {
       bestMs = rankMs
       best = { frequencyHz, fallMs }

@@ -132,3 +132,10 @@ describe('readBass', () => {
     expect(readBass(null, bands)[0]).toBe('This capture is too short for a low-frequency waterfall.')
   })
 })
+
+describe('longestRinging', () => {
+  it('returns the frequency that falls least when several never fall 20 dB in the view', () => {
+    const data: WaterfallData = { frequencyHz: [40, 50, 60], timeMs: [0, 200], levelDb: [[0, 0, 0], [-12, -4, -8]] }
+    expect(longestRinging(data)).toEqual({ frequencyHz: 50, fallMs: null })
+  })
+})

@@ -5,6 +5,11 @@ import path from 'node:path'
 import { createApp } from '../../server/app'
 import { seedDemoData } from '../../server/db/demoData'
 import { startTestServices, type TestServices } from './testServices'
+import { Worker } from 'bullmq'
+import { Redis } from 'ioredis'
+import { processAnalysisJob } from '../../worker/processAnalysisJob'
+import { requeueUploadedCaptures } from '../../server/services/capturesService'
+import { ANALYSIS_QUEUE_NAME, type AnalysisJobPayload } from '../../shared/jobs/analysisJob'
 
 export interface RunningApp {
   baseUrl: string
@@ -12,8 +17,12 @@ export interface RunningApp {
   stop: () => Promise<void>
 }
 
-/** The built client served by a real server on a free loopback port, with the demo data seeded. */
-export async function startRunningApp(): Promise<RunningApp> {
+/**
+ * The built client served by a real server on a free loopback port, with the demo data seeded.
+ * With `withWorker`, an analysis worker runs in-process and the demo captures are queued, as
+ * `npm start` does.
+ */
+export async function startRunningApp(options: { withWorker?: boolean } = {}): Promise<RunningApp> {
   const clientDir = path.resolve('dist')
   if (!existsSync(path.join(clientDir, 'index.html'))) {
     throw new Error('Browser tests need the built client: run `npm run build` first (npm run test:all does).')
@@ -25,10 +34,20 @@ export async function startRunningApp(): Promise<RunningApp> {
     const listening = ringdown.app.listen(0, '127.0.0.1', () => resolve(listening))
   })
   const { port } = server.address() as AddressInfo
+  let worker: Worker<AnalysisJobPayload> | null = null
+  let workerConnection: Redis | null = null
+  if (options.withWorker) {
+    workerConnection = new Redis(services.config.REDIS_URL, { maxRetriesPerRequest: null })
+    const storageDir = services.config.STORAGE_DIR
+    worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir }), { connection: workerConnection })
+    await requeueUploadedCaptures(ringdown.queue)
+  }
   return {
     baseUrl: `http://127.0.0.1:${port}`,
     services,
     stop: async () => {
+      await worker?.close()
+      await workerConnection?.quit()
       server.closeAllConnections()
       await new Promise<void>((resolve) => server.close(() => resolve()))
       await ringdown.close()

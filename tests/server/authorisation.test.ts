@@ -70,6 +70,12 @@ function routesIntoB() {
     ['get', `/api/workspaces/${b.workspace.id}/materials`],
     ['post', `/api/workspaces/${b.workspace.id}/materials`, validMaterial],
     ['delete', `/api/workspaces/${b.workspace.id}/materials/1`],
+    ['post', `/api/workspaces/${b.workspace.id}/invitations`, { email: 'x@example.test', role: 'viewer' }],
+    ['get', `/api/workspaces/${b.workspace.id}/invitations`],
+    ['post', `/api/rooms/${b.sharedRoom.id}/share-links`, { surveyIds: [b.sharedSurvey.id, b.privateSurvey.id] }],
+    ['get', `/api/rooms/${b.sharedRoom.id}/share-links`],
+    ['delete', `/api/rooms/${b.sharedRoom.id}/share-links/1`],
+    ['get', `/api/rooms/${b.sharedRoom.id}/activity`],
   ] as const
 }
 

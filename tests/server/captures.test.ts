@@ -105,18 +105,21 @@ describe('POST /api/surveys/:surveyId/captures — a good upload', () => {
   it('lists the survey captures and hides them from another workspace', async () => {
     const list = await client.get(`/api/surveys/${a.sharedSurvey.id}/captures`)
     expect(list.status).toBe(200)
-    expect(list.body).toHaveLength(1)
+    const uploaded = list.body.filter((c: { originalName: string }) => c.originalName === 'capture.wav')
+    expect(uploaded).toHaveLength(1)
+    expect(uploaded[0].headline).toBeNull()
     const outsider = await signedInAgent(ringdown.app, b.users.owner.email, FIXTURE_PASSWORD)
     expect((await outsider.get(`/api/surveys/${a.sharedSurvey.id}/captures`)).status).toBe(404)
-    expect((await outsider.get(`/api/captures/${list.body[0].id}`)).status).toBe(404)
-    expect((await outsider.delete(`/api/captures/${list.body[0].id}`)).status).toBe(404)
-    expect((await client.get(`/api/captures/${list.body[0].id}/analysis`)).body.error.code).toBe('analysis-not-ready')
+    expect((await outsider.get(`/api/captures/${uploaded[0].id}`)).status).toBe(404)
+    expect((await outsider.delete(`/api/captures/${uploaded[0].id}`)).status).toBe(404)
+    expect((await client.get(`/api/captures/${uploaded[0].id}/analysis`)).body.error.code).toBe('analysis-not-ready')
   })
 
   it('lets a viewer read but not delete, and the uploader delete, removing the file', async () => {
-    const [capture] = (await client.get(`/api/surveys/${a.sharedSurvey.id}/captures`)).body
+    const capture = (await client.get(`/api/surveys/${a.sharedSurvey.id}/captures`)).body.find((c: { originalName: string }) => c.originalName === 'capture.wav')
     expect((await viewer.get(`/api/captures/${capture.id}`)).status).toBe(200)
     expect((await viewer.delete(`/api/captures/${capture.id}`)).status).toBe(403)
+    expect((await client.delete(`/api/captures/${a.sharedCapture.id}`)).status).toBe(403) // uploaded by the engineer
     expect((await client.delete(`/api/captures/${capture.id}`)).status).toBe(204)
     expect(await storedFiles()).toEqual([])
   })

@@ -1,0 +1,28 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import * as invitations from '../controllers/invitationsController'
+import { validate } from '../middleware/validate'
+import { requireAuth } from '../middleware/requireAuth'
+import { idParam } from '../../shared/api/common'
+import { createInvitationBodySchema, createShareLinkBodySchema } from '../../shared/api/invitations'
+import type { MailContext } from '../services/invitationsService'
+
+const workspaceParams = z.object({ workspaceId: idParam })
+const roomParams = z.object({ roomId: idParam })
+const linkParams = z.object({ roomId: idParam, linkId: idParam })
+const tokenParams = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'That link is not valid: copy the whole link from the e-mail.') })
+
+/** Invitations, read-only share links and the activity trail. */
+export function invitationsRouter(context: MailContext) {
+  const router = Router()
+  router.post('/workspaces/:workspaceId/invitations', requireAuth, validate({ params: workspaceParams, body: createInvitationBodySchema }), invitations.create(context))
+  router.get('/workspaces/:workspaceId/invitations', requireAuth, validate({ params: workspaceParams }), invitations.list)
+  router.get('/invitations/:token', validate({ params: tokenParams }), invitations.preview)
+  router.post('/invitations/:token/accept', requireAuth, validate({ params: tokenParams }), invitations.accept)
+  router.post('/rooms/:roomId/share-links', requireAuth, validate({ params: roomParams, body: createShareLinkBodySchema }), invitations.createShareLink(context.publicUrl))
+  router.get('/rooms/:roomId/share-links', requireAuth, validate({ params: roomParams }), invitations.listShareLinks)
+  router.delete('/rooms/:roomId/share-links/:linkId', requireAuth, validate({ params: linkParams }), invitations.revokeShareLink)
+  router.get('/shared/:token', validate({ params: tokenParams }), invitations.viewShared)
+  router.get('/rooms/:roomId/activity', requireAuth, validate({ params: roomParams }), invitations.activity)
+  return router
+}
