@@ -24,7 +24,22 @@ const SYMBOLS: Record<RoomModeType, { symbol: string; size: number }> = { axial:
 export function describeRoomModes(input: RoomModesChartInput): string {
   const counts = MODE_TYPES.map((t) => `${input.modes.filter((m) => m.type === t).length} ${t}`).join(', ')
   const first = input.modes.slice(0, 3).map((m) => `${formatFrequencyWithUnit(m.frequencyHz)} (${m.indices.join(',')})`).join(', ')
-  return `Room modes 20–300 Hz: ${counts}; lowest ${first || 'none'}.${input.predicted ? ' Predicted level at the listener in dB.' : ''}${input.measured ? ' Measured response overlaid.' : ''}`
+  return `Room modes 20–300 Hz: ${counts}; lowest ${first || 'none'}.${input.predicted ? ` Predicted level at the listener: ${extremes(input.predicted)}.` : ''}${input.measured ? ` Measured: ${extremes(input.measured)}.` : ''}`
+}
+
+/** "highest +18.9 dB at 34.5 Hz, lowest −4.1 dB at 48 Hz" over 30–200 Hz, where the bass is judged. */
+function extremes(curve: BassCurve): string {
+  let high = -1
+  let low = -1
+  curve.levelDb.forEach((level, i) => {
+    const f = curve.frequencyHz[i] ?? 0
+    if (f < 30 || f > 200 || !Number.isFinite(level)) return
+    if (high < 0 || level > curve.levelDb[high]!) high = i
+    if (low < 0 || level < curve.levelDb[low]!) low = i
+  })
+  if (high < 0) return 'no values between 30 and 200 Hz'
+  const at = (i: number) => `${formatMeasure(curve.levelDb[i], 1, 'dB')} at ${formatFrequencyWithUnit(curve.frequencyHz[i]!)}`
+  return `highest ${at(high)}, lowest ${at(low)} (30–200 Hz)`
 }
 
 /** Response curves above (dB re free field at 1 m), a ladder of mode markers by type below; both on one log axis 20–300 Hz. */

@@ -42,7 +42,8 @@ export function useRoomModel(roomId: Ref<number>, room: Ref<RoomDimensions | nul
     const model = await load.run(id)
     if (model) adopt(model)
   }, { immediate: true })
-  watch(room, () => resetLayout())
+  // Only a change of size resets the draft: a refetch of the same room must not drop unsaved edits.
+  watch(() => (room.value ? `${room.value.lengthM}×${room.value.widthM}×${room.value.heightM}` : null), () => resetLayout())
 
   const hasSavedLayout = computed(() => saved.value?.layout != null)
   const hasSavedTreatment = computed(() => saved.value?.treatment != null)
