@@ -34,7 +34,7 @@ ensure_server_packages() {
 }
 
 ensure_browser_packages() {
-  ensure_packages 'chromium:test -x /usr/bin/chromium'
+  ensure_packages 'chromium:test -x /usr/bin/chromium' 'poppler-utils:command -v pdftotext'
 }
 
 # Installs the npm dependencies when node_modules is missing or older than the lock file.

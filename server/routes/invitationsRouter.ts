@@ -1,10 +1,12 @@
 import { Router } from 'express'
 import { z } from 'zod'
 import * as invitations from '../controllers/invitationsController'
+import * as reports from '../controllers/reportsController'
+import { comparisonQuerySchema } from '../../shared/api/results'
 import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
-import { createInvitationBodySchema, createShareLinkBodySchema } from '../../shared/api/invitations'
+import { createInvitationBodySchema, createShareLinkBodySchema, sendReportBodySchema } from '../../shared/api/invitations'
 import type { MailContext } from '../services/invitationsService'
 
 const workspaceParams = z.object({ workspaceId: idParam })
@@ -12,7 +14,7 @@ const roomParams = z.object({ roomId: idParam })
 const linkParams = z.object({ roomId: idParam, linkId: idParam })
 const tokenParams = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'That link is not valid: copy the whole link from the e-mail.') })
 
-/** Invitations, read-only share links and the activity trail. */
+/** Invitations, read-only share links, PDF reports and the activity trail. */
 export function invitationsRouter(context: MailContext) {
   const router = Router()
   router.post('/workspaces/:workspaceId/invitations', requireAuth, validate({ params: workspaceParams, body: createInvitationBodySchema }), invitations.create(context))
@@ -23,6 +25,9 @@ export function invitationsRouter(context: MailContext) {
   router.get('/rooms/:roomId/share-links', requireAuth, validate({ params: roomParams }), invitations.listShareLinks)
   router.delete('/rooms/:roomId/share-links/:linkId', requireAuth, validate({ params: linkParams }), invitations.revokeShareLink)
   router.get('/shared/:token', validate({ params: tokenParams }), invitations.viewShared)
+  router.get('/rooms/:roomId/report.pdf', requireAuth, validate({ params: roomParams, query: comparisonQuerySchema }), reports.roomReport)
+  router.post('/rooms/:roomId/reports', requireAuth, validate({ params: roomParams, body: sendReportBodySchema }), reports.send(context))
+  router.get('/shared/:token/report.pdf', validate({ params: tokenParams }), reports.sharedReport)
   router.get('/rooms/:roomId/activity', requireAuth, validate({ params: roomParams }), invitations.activity)
   return router
 }

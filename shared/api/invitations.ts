@@ -69,3 +69,11 @@ export interface ActivityDto {
   userName: string | null
   createdAt: string
 }
+
+export const sendReportBodySchema = z.object({
+  surveyIds: z.array(z.number().int().positive()).min(2, 'Choose at least two surveys.').max(6),
+  bands: z.enum(['octave', 'third']).default('octave'),
+  recipientEmail: z.email('Enter the client’s e-mail address.').trim().toLowerCase(),
+  expiresInDays: z.number().int().min(1).max(365).nullable().default(90),
+})
+export type SendReportBody = z.infer<typeof sendReportBodySchema>

@@ -1,0 +1,28 @@
+import type { BandVerdict } from '../../shared/room/targets/bandVerdict'
+
+const VERDICT_TEXT: Record<BandVerdict, string> = {
+  inside: 'inside target',
+  'too-live': 'too live',
+  'too-dead': 'too dead',
+  'not-reliable': 'not reliable',
+  'no-target': 'no target here',
+}
+
+export const verdictText = (verdict: BandVerdict) => VERDICT_TEXT[verdict]
+
+/** How the numbers were made, for the report's method section. */
+export const METHOD_NOTES = [
+  'Impulse responses measured directly or deconvolved from exponential sine sweeps (ISO 18233; Farina 2000).',
+  'Band filters: IEC 61260-1 base-10 octave or third-octave bands, 6-pole Butterworth band-pass (class 1), time-reversed filtering (ISO 3382-2, 7.3 note).',
+  'Decay: Schroeder backward integration (ISO 3382-1, 5.3.3) with noise-floor truncation and compensation in the manner of Lundeby et al. (1995).',
+  'Evaluation ranges: EDT 0 to −10 dB, T20 −5 to −25 dB, T30 −5 to −35 dB, least-squares fits (ISO 3382-1 and -2).',
+  'The band value judged is the mean T30 over positions, or T20 where T30 is flagged; flagged bands are reported as not reliable, never hidden.',
+  'Measurement uncertainty of T20/T30 per ISO 3382-2 Annex A; survey values are arithmetic means over positions with their spread.',
+]
+
+export const REPORT_CAUTIONS = [
+  'Predictions and targets are estimates; small rooms are not diffuse below the Schroeder frequency.',
+  'Mounting panels, bass traps or speakers on walls and ceilings needs fixings suited to the load and the wall.',
+  'Check the fire ratings of foams, fibres and fabrics; follow local building and fire codes, and use licensed professionals for structural, electrical and fire-safety work.',
+  'Test signals can be loud: start playback low and protect your hearing.',
+]
