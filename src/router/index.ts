@@ -16,6 +16,7 @@ const ROOM_MANAGERS: readonly Role[] = ['owner', 'engineer']
 const roomIdProp = (route: RouteLocationNormalized) => ({ roomId: Number(route.params.roomId) })
 const surveyProps = (route: RouteLocationNormalized) => ({ roomId: Number(route.params.roomId), surveyId: Number(route.params.surveyId) })
 const captureIdProp = (route: RouteLocationNormalized) => ({ captureId: Number(route.params.captureId) })
+const tokenProp = (route: RouteLocationNormalized) => ({ token: String(route.params.token) })
 
 export const router = createRouter({
   history: createWebHistory(import.meta.env.BASE_URL),
@@ -28,9 +29,16 @@ export const router = createRouter({
     { path: '/rooms/:roomId(\\d+)', name: 'room', component: () => import('@/views/RoomView.vue'), props: roomIdProp, meta: { title: 'Room' } },
     { path: '/rooms/:roomId(\\d+)/edit', name: 'room-edit', component: () => import('@/views/RoomFormView.vue'), props: roomIdProp, meta: { title: 'Edit room' } },
     { path: '/rooms/:roomId(\\d+)/surveys/:surveyId(\\d+)', name: 'survey', component: () => import('@/views/SurveyView.vue'), props: surveyProps, meta: { title: 'Survey' } },
+    { path: '/rooms/:roomId(\\d+)/model', name: 'room-model', component: () => import('@/views/RoomModelView.vue'), props: roomIdProp, meta: { title: 'Room model' } },
     { path: '/rooms/:roomId(\\d+)/compare', name: 'compare', component: () => import('@/views/CompareView.vue'), props: roomIdProp, meta: { title: 'Compare surveys' } },
     { path: '/captures/:captureId(\\d+)', name: 'capture', component: () => import('@/views/CaptureView.vue'), props: captureIdProp, meta: { title: 'Capture' } },
     { path: '/test-signal', name: 'test-signal', component: () => import('@/views/TestSignalView.vue'), meta: { title: 'Test signal' } },
+    { path: '/learn', name: 'learn', component: () => import('@/views/LearnView.vue'), meta: { access: 'any', title: 'Learn: how sound decays' } },
+    { path: '/invitations/:token', name: 'invitation', component: () => import('@/views/InvitationView.vue'), props: tokenProp, meta: { access: 'any', title: 'Invitation' } },
+    { path: '/forgot-password', name: 'forgot-password', component: () => import('@/views/ForgotPasswordView.vue'), meta: { access: 'guest', title: 'Forgot password' } },
+    { path: '/reset-password/:token', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), props: tokenProp, meta: { access: 'guest', title: 'Choose a new password' } },
+    { path: '/shared/:token', name: 'shared', component: () => import('@/views/SharedComparisonView.vue'), props: tokenProp, meta: { access: 'any', title: 'Shared report' } },
+    { path: '/dev/mailbox', name: 'dev-mailbox', component: () => import('@/views/DevMailboxView.vue'), meta: { access: 'any', title: 'Mailbox (this machine)' } },
     { path: '/workspace/members', name: 'members', component: () => import('@/views/MembersView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Members' } },
     { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { access: 'any', title: 'Page not found' } },
   ],

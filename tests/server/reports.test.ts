@@ -39,7 +39,8 @@ afterAll(async () => {
   await rm(scratch, { recursive: true, force: true })
 })
 
-const binary = (res: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void) => {
+const binary = (response: unknown, done: (error: Error | null, body: unknown) => void) => {
+  const res = response as NodeJS.ReadableStream
   const chunks: Buffer[] = []
   res.on('data', (chunk: Buffer) => chunks.push(chunk))
   res.on('end', () => done(null, Buffer.concat(chunks)))
