@@ -1,4 +1,5 @@
 import wavefile from 'wavefile'
+import { createSeededRandom } from '../../shared/acoustics/synthetic/seededRandom'
 
 const { WaveFile } = wavefile
 
@@ -6,14 +7,7 @@ const { WaveFile } = wavefile
 export function decayingNoiseWav(options: { sampleRateHz?: number; durationS?: number; bitDepth?: '8' | '16' | '24' | '32f'; t60S?: number; seed?: number } = {}): Uint8Array {
   const { sampleRateHz = 48_000, durationS = 1, bitDepth = '16', t60S = 0.4, seed = 7 } = options
   const count = Math.round(sampleRateHz * durationS)
-  let state = seed >>> 0
-  const random = () => {
-    state = (state + 0x6d2b79f5) >>> 0
-    let t = state
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
+  const { uniform: random } = createSeededRandom(seed)
   const samples = new Float64Array(count)
   const decayPerSample = Math.log(1000) / (t60S * sampleRateHz) // −60 dB amplitude at t60
   for (let i = 0; i < count; i++) samples[i] = 0.5 * (random() * 2 - 1) * Math.exp(-decayPerSample * i)

@@ -1,4 +1,4 @@
-import { createSeededRandom } from '../../helpers/seededRandom'
+import { createSeededRandom } from '../../../shared/acoustics/synthetic/seededRandom'
 
 /** Energy decay constant for reverberation time T: k = 6·ln10/T (facts §11). */
 export const decayConstant = (reverberationTimeS: number) => (6 * Math.LN10) / reverberationTimeS
