@@ -26,6 +26,7 @@ export function toCaptureDto(capture: Capture): CaptureDto {
   return {
     id: capture.id,
     surveyId: capture.surveyId,
+    uploadedById: capture.uploadedById,
     kind: capture.kind,
     channel: capture.channel,
     sourceLabel: capture.sourceLabel,

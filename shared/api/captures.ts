@@ -41,6 +41,8 @@ export interface CaptureHeadline {
 export interface CaptureDto {
   id: number
   surveyId: number
+  /** Who uploaded it (null for demo data): a client may delete their own captures. */
+  uploadedById: number | null
   kind: CaptureKind
   channel: number
   sourceLabel: string
