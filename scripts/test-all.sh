@@ -24,11 +24,12 @@ start_redis
 echo "ringdown: type check"
 npm run --silent typecheck
 echo "ringdown: unit tests"
-npx vitest run --project unit
+npx vitest run --project unit --reporter=default --reporter=json --outputFile.json="$RINGDOWN_DATA_DIR/results-unit.json"
 echo "ringdown: API tests (PostgreSQL + Redis)"
-npx vitest run --project api
+npx vitest run --project api --reporter=default --reporter=json --outputFile.json="$RINGDOWN_DATA_DIR/results-api.json"
 echo "ringdown: building the client for the browser tests"
 npm run --silent build >/dev/null
 echo "ringdown: browser tests (Chromium)"
-npx vitest run --project browser
+npx vitest run --project browser --reporter=default --reporter=json --outputFile.json="$RINGDOWN_DATA_DIR/results-browser.json"
 echo "ringdown: all suites passed"
+node scripts/sumTestResults.mjs "$RINGDOWN_DATA_DIR"/results-*.json
