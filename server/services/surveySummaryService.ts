@@ -4,6 +4,7 @@ import type { SurveyBandReading, SurveySummaryDto } from '../../shared/api/resul
 import type { AnalysisResult, BandResolution } from '../../shared/types/analysis'
 import { latestAnalysesByCapture } from './analysisLookup'
 import { getSurvey, requireSurveyAccess } from './surveysService'
+import { averageDecayCurves } from './averageDecayCurves'
 
 function isFlagged(results: AnalysisResult[], centreHz: number, parameter: 'T20' | 'T30'): boolean {
   return results.some((result) =>
@@ -69,6 +70,7 @@ export async function summariseSurvey(survey: Survey, bands: BandResolution): Pr
     bands: averaged,
     readings: averaged.map((band) => readingOf(band, results)),
     averagedResponse: averageResponses(results),
+    averagedDecays: averageDecayCurves(results),
   }
 }
 

@@ -2,7 +2,7 @@ import { z } from 'zod'
 import type { SpatialAverageBand } from '../acoustics/spatialAverage'
 import type { BandVerdict } from '../room/targets/bandVerdict'
 import type { TargetMask } from '../room/targets/targetMask'
-import type { AnalysisSettings, BandResolution } from '../types/analysis'
+import type { AnalysisSettings, BandResolution, DecayCurve } from '../types/analysis'
 import type { SurveyDto } from './surveys'
 
 export const bandResolutionQuerySchema = z.object({
@@ -31,6 +31,8 @@ export interface SurveySummaryDto {
   readings: SurveyBandReading[]
   /** Power average of the positions' magnitude responses, dB; null before any analysis. */
   averagedResponse: { frequencyHz: number[]; magnitudeDb: number[] } | null
+  /** Energy average of the positions' Schroeder decays per band (no fits), dB re start vs ms. */
+  averagedDecays: DecayCurve[]
 }
 
 export const comparisonQuerySchema = z.object({

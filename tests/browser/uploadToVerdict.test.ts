@@ -65,7 +65,8 @@ describe('from upload to verdict in Chromium', () => {
     const pageText = (await page.locator('main').textContent()) ?? ''
     expect(pageText).toContain('Bare room')
     expect(pageText).toContain('After panels and bass traps')
-    expect(await page.locator('canvas').count()).toBeGreaterThanOrEqual(2)
+    await page.getByTestId('compare-decays').waitFor()
+    expect(await page.locator('canvas').count()).toBeGreaterThanOrEqual(3)
     await page.screenshot({ path: screenshotPath('12-compare'), fullPage: true })
   })
 })
