@@ -6,7 +6,7 @@ import { decodeWav } from '../shared/acoustics/wav/decodeWav'
 import { analyseCapture } from '../shared/acoustics/analyseCapture'
 import { DspInputError } from '../shared/acoustics/errors'
 import type { AnalysisJobPayload } from '../shared/jobs/analysisJob'
-import { keyToSettings, settingsToKey } from './analysisSettings'
+import { keyToSettings, settingsToKey } from '../shared/jobs/analysisSettingsKey'
 
 export interface ProcessorContext {
   storageDir: string

@@ -12,7 +12,7 @@ import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { AnalysisDto, CaptureDto, CaptureHeadline, CreateCaptureFields } from '../../shared/api/captures'
 import type { AnalysisResult } from '../../shared/types/analysis'
 import { latestAnalysesByCapture } from './analysisLookup'
-import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../worker/analysisSettings'
+import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
 import { logger } from '../logger'
 import { recordActivity } from './activityService'
 

@@ -4,7 +4,7 @@ import { requireRoomAccess } from '../policy/roomAccess'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { AnalysisListItemDto } from '../../shared/api/results'
 import type { AnalysisSettings } from '../../shared/types/analysis'
-import { keyToSettings, settingsToKey } from '../../worker/analysisSettings'
+import { keyToSettings, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
 import { recordActivity } from './activityService'
 
 async function requireCapture(userId: number, captureId: number, action: 'room:read' | 'capture:create') {

@@ -1,12 +1,7 @@
-import type { AnalysisSettings } from '../shared/types/analysis'
+import type { AnalysisSettings } from '../types/analysis'
+import { DEFAULT_ANALYSIS_SETTINGS } from '../acoustics/analyseCapture'
 
-export const DEFAULT_ANALYSIS_SETTINGS: AnalysisSettings = {
-  bands: 'octave',
-  smoothing: 6,
-  channel: 0,
-  gateMs: null,
-  timeReversedFiltering: true,
-}
+export { DEFAULT_ANALYSIS_SETTINGS }
 
 /** Canonical key of a settings object (fixed key order), so one settings set maps to one row. */
 export function settingsToKey(settings: AnalysisSettings): string {
