@@ -171,7 +171,8 @@ export async function listCaptures(userId: number, surveyId: number): Promise<Ca
   return captures.map((capture) => ({ ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }))
 }
 
-async function requireCaptureAccess(userId: number, captureId: number) {
+/** Loads a capture the caller may read; a capture in a room they cannot see is a 404. */
+export async function requireCaptureAccess(userId: number, captureId: number) {
   const capture = await Capture.findByPk(captureId, { include: [{ association: 'survey' }] })
   if (!capture) throw new NotFoundError('That capture')
   const survey = (capture as Capture & { survey?: { roomId: number } }).survey

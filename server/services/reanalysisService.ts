@@ -1,28 +1,15 @@
-import { Analysis, Capture } from '../models'
-import { ForbiddenError, NotFoundError, ValidationError } from '../errors'
-import { requireRoomAccess } from '../policy/roomAccess'
+import { Analysis } from '../models'
+import { ForbiddenError, ValidationError } from '../errors'
+import { mayOnRoom } from '../policy/policy'
+import { requireCaptureAccess } from './capturesService'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { AnalysisListItemDto } from '../../shared/api/results'
 import type { AnalysisSettings } from '../../shared/types/analysis'
 import { keyToSettings, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
 import { recordActivity } from './activityService'
 
-async function requireCapture(userId: number, captureId: number, action: 'room:read' | 'capture:create') {
-  const capture = await Capture.findByPk(captureId, { include: [{ association: 'survey' }] })
-  if (!capture) throw new NotFoundError('That capture')
-  const roomId = (capture as Capture & { survey?: { roomId: number } }).survey!.roomId
-  try {
-    await requireRoomAccess(userId, roomId, 'room:read')
-  } catch (error) {
-    if (error instanceof NotFoundError) throw new NotFoundError('That capture')
-    throw error
-  }
-  if (action !== 'room:read') await requireRoomAccess(userId, roomId, action)
-  return capture
-}
-
 export async function listAnalyses(userId: number, captureId: number): Promise<AnalysisListItemDto[]> {
-  await requireCapture(userId, captureId, 'room:read')
+  await requireCaptureAccess(userId, captureId)
   const analyses = await Analysis.findAll({ where: { captureId }, attributes: ['id', 'settingsKey', 'engineVersion', 'createdAt'], order: [['createdAt', 'ASC']] })
   return analyses.map((a) => ({ id: a.id, settings: keyToSettings(a.settingsKey), engineVersion: a.engineVersion, createdAt: a.createdAt.toISOString() }))
 }
@@ -32,10 +19,8 @@ export async function listAnalyses(userId: number, captureId: number): Promise<A
  * are queued again only when the capture is not done (a retry), else answered as they are.
  */
 export async function requestReanalysis(userId: number, captureId: number, settings: AnalysisSettings, queue: AnalysisQueue): Promise<{ captureId: number; settingsKey: string; status: 'queued' | 'exists' }> {
-  const capture = await requireCapture(userId, captureId, 'capture:create').catch((error: unknown) => {
-    if (error instanceof ForbiddenError) throw new ForbiddenError('Your role may not start analyses.')
-    throw error
-  })
+  const { capture, room, role, isShared } = await requireCaptureAccess(userId, captureId)
+  if (!mayOnRoom(role, isShared, 'capture:create')) throw new ForbiddenError('Your role may not start analyses.')
   if (settings.channel >= capture.channelCount) {
     const message = `Channel ${settings.channel} does not exist: the file has ${capture.channelCount} channel(s), numbered from 0.`
     throw new ValidationError(message, { channel: message })
@@ -44,7 +29,6 @@ export async function requestReanalysis(userId: number, captureId: number, setti
   if (await Analysis.findOne({ where: { captureId, settingsKey }, attributes: ['id'] })) return { captureId, settingsKey, status: 'exists' }
   await queue.enqueue({ captureId, settingsKey })
   await capture.update({ status: 'queued', statusMessage: 'Re-analysis waiting for a worker' })
-  const { room } = await requireRoomAccess(userId, (capture as Capture & { survey?: { roomId: number } }).survey!.roomId, 'room:read')
   await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.reanalysed', summary: `re-analysed ${capture.originalName} (${settings.bands} bands, 1/${settings.smoothing} octave smoothing)` })
   return { captureId, settingsKey, status: 'queued' }
 }
