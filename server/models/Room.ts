@@ -17,6 +17,13 @@ export class Room extends Model<InferAttributes<Room>, InferCreationAttributes<R
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
+  /** The volume calculations use: the given volume (irregular rooms), else L×W×H; null if neither. */
+  effectiveVolumeM3(): number | null {
+    if (this.volumeM3 !== null) return this.volumeM3
+    if (this.lengthM === null || this.widthM === null || this.heightM === null) return null
+    return this.lengthM * this.widthM * this.heightM
+  }
+
   static initModel(sequelize: Sequelize) {
     Room.init(
       {

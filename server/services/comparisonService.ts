@@ -11,12 +11,6 @@ import type { Room } from '../models'
 import { summariseSurvey } from './surveySummaryService'
 import { describeSurvey } from './surveysService'
 
-function roomVolume(room: Room): number | null {
-  if (room.volumeM3 !== null) return room.volumeM3
-  if (room.lengthM === null || room.widthM === null || room.heightM === null) return null
-  return room.lengthM * room.widthM * room.heightM
-}
-
 /** The room's target mask, or null when its volume is unknown or outside the formula's range. */
 function targetOf(room: Room, volumeM3: number | null, bands: BandResolution): TargetMask | null {
   if (volumeM3 === null) return null
@@ -55,7 +49,7 @@ export async function compareSurveysOfRoom(room: Room, surveyIds: number[], band
     throw new ValidationError('Every survey compared must belong to this room.', { surveys: 'Every survey compared must belong to this room.' })
   }
   const ordered = surveyIds.map((id) => surveys.find((s) => s.id === id)!)
-  const volumeM3 = roomVolume(room)
+  const volumeM3 = room.effectiveVolumeM3()
   const target = targetOf(room, volumeM3, bands)
   const entries = []
   for (const survey of ordered) {

@@ -8,12 +8,6 @@ import { recordActivity } from './activityService'
 import type { CreateRoomBody, RoomDto, UpdateRoomBody } from '../../shared/api/rooms'
 import type { Role } from '../../shared/api/common'
 
-function effectiveVolume(room: Room): number | null {
-  if (room.volumeM3 !== null) return room.volumeM3
-  if (room.lengthM === null || room.widthM === null || room.heightM === null) return null
-  return room.lengthM * room.widthM * room.heightM
-}
-
 async function surveyFacts(roomIds: number[]): Promise<Map<number, { count: number; last: string | null }>> {
   const rows = (await Survey.findAll({
     attributes: ['roomId', [fn('COUNT', col('id')), 'count'], [fn('MAX', col('measured_on')), 'last']],
@@ -36,7 +30,7 @@ function toRoomDto(room: Room, role: Role, isShared: boolean, facts?: { count: n
     widthM: room.widthM,
     heightM: room.heightM,
     volumeM3: room.volumeM3,
-    effectiveVolumeM3: effectiveVolume(room),
+    effectiveVolumeM3: room.effectiveVolumeM3(),
     targetProfile: room.targetProfile,
     notes: room.notes,
     surveyCount: facts?.count ?? 0,
