@@ -5,8 +5,7 @@ import * as auth from '../controllers/authController'
 import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { registerBodySchema, signInBodySchema } from '../../shared/api/auth'
-import { passwordResetBodySchema, passwordResetRequestSchema } from '../../shared/api/invitations'
-import { z } from 'zod'
+import { linkTokenParamsSchema, passwordResetBodySchema, passwordResetRequestSchema } from '../../shared/api/invitations'
 import type { MailContext } from '../services/invitationsService'
 import { HttpError } from '../errors'
 
@@ -34,7 +33,7 @@ export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow
   router.post(
     '/password-reset/:token',
     signInLimiter,
-    validate({ params: z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'That reset link is not valid.') }), body: passwordResetBodySchema }),
+    validate({ params: linkTokenParamsSchema('That reset link is not valid.'), body: passwordResetBodySchema }),
     auth.resetPassword(options.sequelize),
   )
   return router

@@ -6,13 +6,13 @@ import { comparisonQuerySchema } from '../../shared/api/results'
 import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
-import { createInvitationBodySchema, createShareLinkBodySchema, sendReportBodySchema } from '../../shared/api/invitations'
+import { createInvitationBodySchema, createShareLinkBodySchema, linkTokenParamsSchema, sendReportBodySchema } from '../../shared/api/invitations'
 import type { MailContext } from '../services/invitationsService'
 
 const workspaceParams = z.object({ workspaceId: idParam })
 const roomParams = z.object({ roomId: idParam })
 const linkParams = z.object({ roomId: idParam, linkId: idParam })
-const tokenParams = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'That link is not valid: copy the whole link from the e-mail.') })
+const tokenParams = linkTokenParamsSchema('That link is not valid: copy the whole link from the e-mail.')
 
 /** Invitations, read-only share links, PDF reports and the activity trail. */
 export function invitationsRouter(context: MailContext) {

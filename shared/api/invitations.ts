@@ -1,6 +1,9 @@
 import { z } from 'zod'
 import { roleSchema, type Role } from './common'
 
+/** The single-use tokens in e-mailed links: 32 random bytes as base64url (43 characters). */
+export const linkTokenParamsSchema = (message: string) => z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, message) })
+
 export const createInvitationBodySchema = z.object({
   email: z.email('Enter a valid e-mail address.').trim().toLowerCase(),
   role: roleSchema,
