@@ -164,6 +164,20 @@ describe('stored content shared between captures', () => {
     expect(await services.store.head(contentKey(sweep.body.sha256))).toBeNull()
   })
 
+  it('never leaves a row without its file when the same content is deleted and uploaded at once', async () => {
+    const { survey } = await roomWithSurvey('Delete and upload together')
+    const bytes = decayingNoiseWav({ seed: 125 })
+    for (let round = 0; round < 6; round++) {
+      const existing = await upload(survey.id, { file: bytes })
+      const [deleted, added] = await Promise.all([engineer.delete(`/api/captures/${existing.body.id}`), upload(survey.id, { file: bytes })])
+      expect(deleted.status).toBe(204)
+      expect(added.status).toBe(202)
+      expect(await services.store.head(contentKey(added.body.sha256))).toEqual({ byteSize: bytes.length })
+      expect((await engineer.delete(`/api/captures/${added.body.id}`)).status).toBe(204)
+      expect(await services.store.head(contentKey(added.body.sha256))).toBeNull()
+    }
+  }, 60_000)
+
   it('purges the files of a deleted survey, except those another survey still uses', async () => {
     const { survey: doomed } = await roomWithSurvey('Deleted survey')
     const { room: otherRoom, survey: kept } = await roomWithSurvey('Keeps a shared file')
