@@ -1,7 +1,4 @@
 import { spawn, type ChildProcess } from 'node:child_process'
-import { mkdtemp, rm } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import { performance } from 'node:perf_hooks'
 import { Op } from 'sequelize'
 import { Queue } from 'bullmq'
@@ -17,8 +14,7 @@ import { decayingNoiseWav } from '../tests/helpers/wavFixtures'
 // the throughput of 50 queued captures with one and with two worker processes. Needs the
 // throw-away services scripts/bench.sh starts (it wipes that database).
 
-const storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-bench-'))
-const services = await startTestServices({ STORAGE_DIR: storageDir })
+const services = await startTestServices()
 const ringdown = createApp(services)
 const fixture = await createWorkspaceFixture('Bench')
 const engineer = await signedInAgent(ringdown.app, fixture.users.engineer.email, FIXTURE_PASSWORD)
@@ -26,7 +22,7 @@ const fileBytes = Buffer.from(decayingNoiseWav({ sampleRateHz: 48_000, durationS
 
 function startWorkers(count: number): ChildProcess[] {
   return Array.from({ length: count }, () =>
-    spawn(process.execPath, ['--import', 'tsx', 'worker/index.ts'], { env: { ...process.env, STORAGE_DIR: storageDir, LOG_LEVEL: 'silent' }, stdio: 'ignore' }),
+    spawn(process.execPath, ['--import', 'tsx', 'worker/index.ts'], { env: { ...process.env, S3_BUCKET: services.config.S3_BUCKET, LOG_LEVEL: 'silent' }, stdio: 'ignore' }),
   )
 }
 
@@ -85,4 +81,3 @@ for (const workerCount of [1, 2]) {
 await controlQueue.close()
 await ringdown.close()
 await services.close()
-await rm(storageDir, { recursive: true, force: true })

@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs'
 import { parseArgs } from 'node:util'
 import { analyseCapture, DEFAULT_ANALYSIS_SETTINGS } from '../shared/acoustics/analyseCapture'
 import { DspInputError } from '../shared/acoustics/errors'
+import { checkReferenceSweep, type SignalLength } from '../shared/acoustics/sweep/checkReferenceSweep'
 import { decodeWav } from '../shared/acoustics/wav/decodeWav'
 import type { AnalysisSettings, SmoothingFraction } from '../shared/types/analysis'
 import { analysisToCliJson } from './analysisToCliJson'
@@ -38,7 +39,7 @@ function parseSettings(values: Record<string, string | boolean | undefined>): An
   return { ...DEFAULT_ANALYSIS_SETTINGS, bands, smoothing: smoothing as SmoothingFraction, channel }
 }
 
-function sweepOptions(values: Record<string, string | boolean | undefined>, sampleRateHz: number) {
+function sweepOptions(values: Record<string, string | boolean | undefined>, recording: SignalLength) {
   const f1Hz = numberOption(values['sweep-f1'] as string | undefined, 'sweep-f1')
   const f2Hz = numberOption(values['sweep-f2'] as string | undefined, 'sweep-f2')
   const durationS = numberOption(values['sweep-seconds'] as string | undefined, 'sweep-seconds')
@@ -49,9 +50,7 @@ function sweepOptions(values: Record<string, string | boolean | undefined>, samp
   if (given === 3) return { kind: 'sweep' as const, sweep: { f1Hz: f1Hz as number, f2Hz: f2Hz as number, durationS: durationS as number } }
   if (!reference) return { kind: 'impulse' as const }
   const decoded = decodeWav(readBytes(reference))
-  if (decoded.sampleRateHz !== sampleRateHz) {
-    throw new UsageError(`the reference sweep is at ${decoded.sampleRateHz} Hz but the recording at ${sampleRateHz} Hz`)
-  }
+  checkReferenceSweep(recording, { sampleRateHz: decoded.sampleRateHz, frameCount: decoded.samples.length })
   return { kind: 'sweep' as const, referenceSweep: decoded.samples }
 }
 
@@ -74,7 +73,7 @@ function main(argv: string[]): void {
   const file = positionals[0] as string
   const settings = parseSettings(values)
   const decoded = decodeWav(readBytes(file), { channel: settings.channel })
-  const sweep = sweepOptions(values, decoded.sampleRateHz)
+  const sweep = sweepOptions(values, { sampleRateHz: decoded.sampleRateHz, frameCount: decoded.samples.length })
   const result = analyseCapture(decoded.samples, { sampleRateHz: decoded.sampleRateHz, settings, inputWarnings: decoded.warnings, ...sweep })
   const output = values.json
     ? JSON.stringify(analysisToCliJson(result, { file, channel: settings.channel, inputWarnings: decoded.warnings }))

@@ -11,10 +11,14 @@ ensure_server_packages
 export RINGDOWN_DATA_DIR="$(mktemp -d /tmp/ringdown-bench.XXXXXX)"
 chmod 755 "$RINGDOWN_DATA_DIR"
 export PG_PORT="${BENCH_PG_PORT:-55434}" REDIS_PORT="${BENCH_REDIS_PORT:-56381}" REDIS_PERSIST=no NODE_ENV=test
-unset DATABASE_URL REDIS_URL
-cleanup() { stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
+export S3_PORT="${BENCH_S3_PORT:-56392}"
+unset DATABASE_URL REDIS_URL S3_ENDPOINT
+cleanup() { stop_s3; stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
 trap cleanup EXIT
 start_postgres >/dev/null
 start_redis >/dev/null
+start_s3 >/dev/null
 echo "== pipeline (upload → queue → worker → PostgreSQL) =="
 npx tsx bench/pipeline.ts
+echo "== uploads (streamed into object storage) =="
+npx tsx bench/uploadMemory.ts

@@ -10,7 +10,7 @@ export RINGDOWN_DATA_DIR="${RINGDOWN_DATA_DIR:-$PWD/.data}"
 export PG_PORT="${PG_PORT:-55432}" REDIS_PORT="${REDIS_PORT:-56379}" PORT="${PORT:-3000}"
 export REDIS_PERSIST=yes NODE_ENV=production
 export STORAGE_DIR="${STORAGE_DIR:-$RINGDOWN_DATA_DIR/files}" MAIL_DIR="${MAIL_DIR:-$RINGDOWN_DATA_DIR/mail}"
-mkdir -p "$RINGDOWN_DATA_DIR" "$STORAGE_DIR"
+mkdir -p "$RINGDOWN_DATA_DIR"
 if [ ! -s "$RINGDOWN_DATA_DIR/session-secret" ]; then
   (umask 077; head -c 32 /dev/urandom | base64 > "$RINGDOWN_DATA_DIR/session-secret")
 fi
@@ -22,6 +22,7 @@ shutdown() {
   echo; echo "ringdown: stopping"
   for pid in "${children[@]}"; do kill -TERM "$pid" 2>/dev/null || true; done
   for pid in "${children[@]}"; do wait "$pid" 2>/dev/null || true; done
+  stop_s3
   stop_services
 }
 trap shutdown INT TERM EXIT
@@ -30,6 +31,7 @@ ensure_server_packages
 ensure_node_modules
 start_postgres
 start_redis
+start_s3
 npm run --silent migrate
 npm run --silent seed
 echo "ringdown: building the client"

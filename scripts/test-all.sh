@@ -15,11 +15,13 @@ export RINGDOWN_DATA_DIR="$(mktemp -d /tmp/ringdown-test.XXXXXX)"
 chmod 755 "$RINGDOWN_DATA_DIR"
 export PG_PORT="${TEST_PG_PORT:-55433}" REDIS_PORT="${TEST_REDIS_PORT:-56380}" REDIS_PERSIST=no
 export STORAGE_DIR="$RINGDOWN_DATA_DIR/files" MAIL_DIR="$RINGDOWN_DATA_DIR/mail" NODE_ENV=test SESSION_SECRET="test-secret-$RANDOM$RANDOM"
-unset DATABASE_URL REDIS_URL
-cleanup() { stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
+export S3_PORT="${TEST_S3_PORT:-56391}"
+unset DATABASE_URL REDIS_URL S3_ENDPOINT
+cleanup() { stop_s3; stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
 trap cleanup EXIT
 start_postgres
 start_redis
+start_s3
 
 echo "ringdown: type check"
 npm run --silent typecheck

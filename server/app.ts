@@ -23,6 +23,7 @@ import { invitationsRouter } from './routes/invitationsRouter'
 import { createSmtpMailer, type Mailer } from './mail/mailer'
 import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
+import { createObjectStore, type ObjectStore } from './storage/createObjectStore'
 import { errorHandler, notFoundHandler } from './middleware/errorHandler'
 import { checkHealth } from './services/healthService'
 import { initModels } from './models'
@@ -38,6 +39,8 @@ export interface AppDependencies {
   queue?: AnalysisQueue
   /** Defaults to SMTP_URL, else the local fake inbox on FAKE_SMTP_PORT. */
   mailer?: Mailer
+  /** Defaults to the bucket the S3_* settings name. */
+  store?: ObjectStore
 }
 
 export const APP_VERSION = '0.1.0'
@@ -49,6 +52,7 @@ function isLoopback(address: string): boolean {
 export interface RingdownApp {
   app: Express
   queue: AnalysisQueue
+  store: ObjectStore
   /** Closes what the app itself opened (the session store's pool, the queue). */
   close: () => Promise<void>
 }
@@ -60,6 +64,7 @@ export function createApp({
   clientDir = path.resolve('dist'),
   queue = createAnalysisQueue(redis),
   mailer = createSmtpMailer(config.SMTP_URL ?? `smtp://127.0.0.1:${config.FAKE_SMTP_PORT}`, config.MAIL_FROM),
+  store = createObjectStore(config),
 }: AppDependencies): RingdownApp {
   initModels(sequelize)
   const mail = { mailer, publicUrl: config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}` }
@@ -118,8 +123,8 @@ export function createApp({
     authRouter({ sequelize, signInLimitPerWindow: config.SIGN_IN_RATE_LIMIT, generateCsrfToken: (req) => generateToken(req as express.Request), mail }),
   )
   app.use('/api/workspaces', workspacesRouter())
-  app.use('/api/rooms', roomsRouter())
-  app.use('/api', capturesRouter({ storageDir: config.STORAGE_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB, queue }))
+  app.use('/api/rooms', roomsRouter({ store }))
+  app.use('/api', capturesRouter({ store, uploadLimitMb: config.UPLOAD_LIMIT_MB, queue }))
   app.use('/api', resultsRouter({ queue }))
   app.use('/api', roomModelRouter())
   app.use('/api', invitationsRouter(mail))
@@ -131,7 +136,7 @@ export function createApp({
       res.json(await readFakeInbox(config.MAIL_DIR))
     })
   }
-  app.use('/api/surveys', surveysRouter())
+  app.use('/api/surveys', surveysRouter({ store }))
   app.use('/api', notFoundHandler)
 
   if (existsSync(path.join(clientDir, 'index.html'))) {
@@ -139,5 +144,5 @@ export function createApp({
     app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
   }
   app.use(errorHandler)
-  return { app, queue, close: async () => { mailer.close(); await Promise.allSettled([sessionPool.end(), queue.close()]) } }
+  return { app, queue, store, close: async () => { mailer.close(); await Promise.allSettled([sessionPool.end(), queue.close()]) } }
 }

@@ -8,6 +8,7 @@ const envSchema = z.object({
   DATABASE_URL: z.string().min(1, 'DATABASE_URL is required (the start command sets it).'),
   REDIS_URL: z.string().min(1, 'REDIS_URL is required (the start command sets it).'),
   SESSION_SECRET: z.string().min(8).default('ringdown-development-secret'),
+  /** Where an earlier version kept uploaded files; `npm run migrate` moves them into the bucket once. */
   STORAGE_DIR: z.string().default('.data/files'),
   /** Set when the app is served over TLS (directly or behind a proxy): cookies become Secure. */
   TRUST_PROXY: z.enum(['0', '1']).default('0'),
@@ -27,6 +28,16 @@ const envSchema = z.object({
   PUBLIC_URL: z.string().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /**
+   * Object storage through the S3 API. Without S3_ENDPOINT the SDK's own endpoint for S3_REGION is
+   * used; credentials come from the SDK's usual chain (AWS_ACCESS_KEY_ID/AWS_SECRET_ACCESS_KEY,
+   * profile, instance role). The start and test commands run a local S3 fake and set all of these.
+   */
+  S3_ENDPOINT: z.preprocess((value) => (value === '' ? undefined : value), z.string().url('S3_ENDPOINT must be a URL such as http://127.0.0.1:56390').optional()),
+  S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'S3_BUCKET must be a valid bucket name (3–63 lower-case letters, digits, dots, hyphens).').default('ringdown'),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  /** Path-style addressing (http://host/bucket/key); default on when S3_ENDPOINT is set, as compatible servers need. */
+  S3_FORCE_PATH_STYLE: z.enum(['0', '1']).optional(),
 })
 
 export type AppConfig = z.infer<typeof envSchema>

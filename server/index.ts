@@ -5,6 +5,7 @@ import { createApp } from './app'
 import { logger } from './logger'
 import { requeueUploadedCaptures } from './services/capturesService'
 import { startFakeSmtpInbox } from './mail/fakeSmtpInbox'
+import { startStorageHousekeeping } from './storage/startStorageHousekeeping'
 
 // The only file that listens. Stops accepting connections on SIGTERM/SIGINT, then closes pools.
 const config = loadConfig()
@@ -14,7 +15,10 @@ redis.on('error', (error) => logger.warn({ err: error }, 'redis connection probl
 // Without SMTP_URL, mail goes to a local fake inbox (files in MAIL_DIR, shown at /api/dev/mailbox).
 const fakeInbox = config.SMTP_URL ? null : await startFakeSmtpInbox({ port: config.FAKE_SMTP_PORT, mailDir: config.MAIL_DIR })
 if (fakeInbox) logger.info(`fake SMTP inbox on 127.0.0.1:${fakeInbox.port}, messages in ${config.MAIL_DIR}`)
-const { app, queue, close } = createApp({ config, sequelize, redis })
+const { app, queue, store, close } = createApp({ config, sequelize, redis })
+// Temporary uploads of a server that stopped mid-upload, and files no row uses any more, are
+// removed now and every few minutes.
+const storageHousekeeping = startStorageHousekeeping(store)
 
 // Captures accepted while Redis was down stay `uploaded`; queue them once it answers again.
 const REQUEUE_INTERVAL_MS = 10_000
@@ -34,9 +38,11 @@ async function shutdown(signal: string) {
   isStopping = true
   logger.info({ signal }, 'shutting down')
   clearInterval(requeueTimer)
+  storageHousekeeping.stop()
   server.close()
   server.closeAllConnections()
   await Promise.allSettled([close(), sequelize.close(), redis.quit(), fakeInbox?.close()])
+  store.close()
   process.exit(0)
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'))

@@ -3,18 +3,21 @@ import { Redis } from 'ioredis'
 import { loadConfig } from '../server/config'
 import { createSequelize } from '../server/db/createSequelize'
 import { initModels } from '../server/models'
+import { createObjectStore } from '../server/storage/createObjectStore'
 import { logger } from '../server/logger'
 import { ANALYSIS_QUEUE_NAME, type AnalysisJobPayload } from '../shared/jobs/analysisJob'
 import { processAnalysisJob } from './processAnalysisJob'
 
-// `npm run worker`: consumes the analysis queue. Safe to run many times against one Redis and one
-// PostgreSQL; on SIGTERM it finishes the job in hand, then exits.
+// `npm run worker`: consumes the analysis queue. Safe to run many times, on any machine, against
+// one Redis, one PostgreSQL and one bucket (DATABASE_URL, REDIS_URL, S3_*); it reads no local
+// files. On SIGTERM it finishes the job in hand, then exits.
 const config = loadConfig()
 const sequelize = createSequelize(config.DATABASE_URL)
 initModels(sequelize)
 const connection = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null })
+const store = createObjectStore(config)
 
-const worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir: config.STORAGE_DIR }), {
+const worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store }), {
   connection,
   concurrency: 1,
   lockDuration: config.WORKER_LOCK_DURATION_MS,
@@ -28,6 +31,7 @@ worker.on('error', (error) => logger.error({ err: error }, 'worker error'))
 async function shutdown(signal: string) {
   logger.info({ signal }, 'worker stopping after the job in hand')
   await worker.close()
+  store.close()
   await Promise.allSettled([connection.quit(), sequelize.close()])
   process.exit(0)
 }

@@ -1,7 +1,7 @@
-import { readFile } from 'node:fs/promises'
 import { UnrecoverableError, type Job } from 'bullmq'
 import { Analysis, Capture } from '../server/models'
-import { contentPath } from '../server/storage/contentPath'
+import { ObjectNotFoundError, type ObjectStore } from '../server/storage/createObjectStore'
+import { readContent } from '../server/storage/readContent'
 import { decodeWav } from '../shared/acoustics/wav/decodeWav'
 import { analyseCapture } from '../shared/acoustics/analyseCapture'
 import { DspInputError } from '../shared/acoustics/errors'
@@ -9,16 +9,19 @@ import type { AnalysisJobPayload } from '../shared/jobs/analysisJob'
 import { keyToSettings, settingsToKey } from '../shared/jobs/analysisSettingsKey'
 
 export interface ProcessorContext {
-  storageDir: string
+  /** The bucket the server stores uploads in: the worker reads nothing from a local disk. */
+  store: ObjectStore
 }
 
 type ProgressJob = Pick<Job<AnalysisJobPayload>, 'data' | 'attemptsMade' | 'opts' | 'updateProgress'>
 
-async function readStored(storageDir: string, sha256: string): Promise<Uint8Array> {
+/** A missing object will not appear by retrying; a storage outage will pass, so it is retried. */
+async function readStored(store: ObjectStore, sha256: string): Promise<Uint8Array> {
   try {
-    return new Uint8Array(await readFile(contentPath(storageDir, sha256)))
-  } catch {
-    throw new UnrecoverableError('The stored file is missing. Upload the capture again.')
+    return await readContent(store, sha256)
+  } catch (error) {
+    if (error instanceof ObjectNotFoundError) throw new UnrecoverableError('The stored file is missing. Upload the capture again.')
+    throw error
   }
 }
 
@@ -34,9 +37,9 @@ export async function processAnalysisJob(job: ProgressJob, context: ProcessorCon
   try {
     await capture.update({ status: 'analysing', statusMessage: 'Reading the file' })
     await job.updateProgress({ stage: 'decoding', percent: 10 })
-    const decoded = decodeWav(await readStored(context.storageDir, capture.sha256), { channel: settings.channel })
+    const decoded = decodeWav(await readStored(context.store, capture.sha256), { channel: settings.channel })
     const referenceSweep = capture.referenceSha256
-      ? decodeWav(await readStored(context.storageDir, capture.referenceSha256), { channel: 0 }).samples
+      ? decodeWav(await readStored(context.store, capture.referenceSha256), { channel: 0 }).samples
       : undefined
     await capture.update({ statusMessage: 'Analysing bands' })
     await job.updateProgress({ stage: 'analysing', percent: 30 })

@@ -1,9 +1,11 @@
 # Starts and stops Ringdown's own PostgreSQL cluster and Redis server on loopback.
 # Sourced by start.sh and test-all.sh. Inputs: RINGDOWN_DATA_DIR, PG_PORT, REDIS_PORT,
 # REDIS_PERSIST (yes|no). With DATABASE_URL / REDIS_URL already set, that service is not started.
+# start_s3/stop_s3: the local S3 fake (input S3_PORT); with S3_ENDPOINT set, none is started.
 
 STARTED_PG=""
 STARTED_REDIS=""
+STARTED_S3=""
 
 # Runs a command as the postgres user when we are root (PostgreSQL refuses to run as root).
 as_pg_user() {
@@ -74,6 +76,37 @@ start_redis() {
   STARTED_REDIS="$REDIS_PORT"
   export REDIS_URL="redis://127.0.0.1:${REDIS_PORT}"
   echo "ringdown: Redis on 127.0.0.1:$REDIS_PORT"
+}
+
+start_s3() {
+  if [ -n "${S3_ENDPOINT:-}" ]; then echo "ringdown: using S3_ENDPOINT (not starting the local S3 fake)"; return 0; fi
+  local dir="$RINGDOWN_DATA_DIR/s3" port="${S3_PORT:-56390}"
+  export S3_BUCKET="${S3_BUCKET:-ringdown}"
+  mkdir -p "$dir"
+  node scripts/localS3.mjs "$dir" "$port" "$S3_BUCKET" >"$dir/s3.log" 2>&1 &
+  STARTED_S3=$!
+  local tries=0
+  until grep -q 'ringdown-s3: listening' "$dir/s3.log" 2>/dev/null; do
+    if ! kill -0 "$STARTED_S3" 2>/dev/null; then
+      echo "ringdown: the local S3 fake did not start (port $port taken?):" >&2; tail -n 20 "$dir/s3.log" >&2
+      STARTED_S3=""; return 1
+    fi
+    tries=$((tries + 1)); [ $tries -gt 300 ] && { echo "ringdown: the local S3 fake did not answer" >&2; return 1; }
+    sleep 0.1
+  done
+  # The fake accepts only its own fixed key pair; the SDK's default chain reads these.
+  export S3_ENDPOINT="http://127.0.0.1:${port}" S3_REGION="${S3_REGION:-us-east-1}"
+  export AWS_ACCESS_KEY_ID=S3RVER AWS_SECRET_ACCESS_KEY=S3RVER
+  unset AWS_SESSION_TOKEN AWS_PROFILE
+  echo "ringdown: local S3 fake on 127.0.0.1:$port, bucket $S3_BUCKET (data in $dir)"
+}
+
+stop_s3() {
+  if [ -n "$STARTED_S3" ]; then
+    kill -TERM "$STARTED_S3" 2>/dev/null || true
+    wait "$STARTED_S3" 2>/dev/null || true
+    STARTED_S3=""
+  fi
 }
 
 stop_services() {

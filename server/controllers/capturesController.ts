@@ -2,11 +2,13 @@ import type { Request, Response, NextFunction } from 'express'
 import { currentUserId } from '../middleware/requireAuth'
 import * as captures from '../services/capturesService'
 import type { AnalysisQueue } from '../queue/analysisQueue'
+import type { ObjectStore } from '../storage/createObjectStore'
+import type { IncomingUpload } from '../storage/incomingUploadStorage'
 import type { CreateCaptureFields } from '../../shared/api/captures'
 
 type SurveyParams = { surveyId: number }
 type CaptureParams = { captureId: number }
-type UploadedFiles = Record<string, Express.Multer.File[] | undefined>
+type UploadedFiles = Record<string, IncomingUpload[] | undefined>
 
 /** Runs before multer: a caller who may not add to the survey is refused before the upload starts. */
 export async function authoriseUpload(req: Request, _res: Response, next: NextFunction) {
@@ -14,9 +16,9 @@ export async function authoriseUpload(req: Request, _res: Response, next: NextFu
   next()
 }
 
-export function create(context: { storageDir: string; queue: AnalysisQueue }) {
+export function create(context: { store: ObjectStore; queue: AnalysisQueue }) {
   return async (req: Request, res: Response) => {
-    const files = (req.files ?? {}) as UploadedFiles
+    const files = (req.files ?? {}) as unknown as UploadedFiles
     const { surveyId } = req.params as unknown as SurveyParams
     const capture = await captures.createCapture(
       currentUserId(req),
@@ -42,9 +44,9 @@ export async function latestAnalysis(req: Request, res: Response) {
   res.json(await captures.getLatestAnalysis(currentUserId(req), (req.params as unknown as CaptureParams).captureId, analysisId))
 }
 
-export function remove(storageDir: string) {
+export function remove(store: ObjectStore) {
   return async (req: Request, res: Response) => {
-    await captures.deleteCapture(currentUserId(req), (req.params as unknown as CaptureParams).captureId, storageDir)
+    await captures.deleteCapture(currentUserId(req), (req.params as unknown as CaptureParams).captureId, store)
     res.status(204).end()
   }
 }

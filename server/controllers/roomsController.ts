@@ -3,6 +3,7 @@ import { currentUserId } from '../middleware/requireAuth'
 import * as rooms from '../services/roomsService'
 import * as shares from '../services/sharesService'
 import type { CreateRoomBody, ShareRoomBody, UpdateRoomBody } from '../../shared/api/rooms'
+import type { ObjectStore } from '../storage/createObjectStore'
 
 type WorkspaceParams = { workspaceId: number }
 type RoomParams = { roomId: number }
@@ -28,10 +29,12 @@ export async function update(req: Request, res: Response) {
   res.json(await rooms.updateRoom(currentUserId(req), roomId, req.body as UpdateRoomBody))
 }
 
-export async function remove(req: Request, res: Response) {
-  const { roomId } = req.params as unknown as RoomParams
-  await rooms.deleteRoom(currentUserId(req), roomId)
-  res.status(204).end()
+export function remove(store: ObjectStore) {
+  return async (req: Request, res: Response) => {
+    const { roomId } = req.params as unknown as RoomParams
+    await rooms.deleteRoom(currentUserId(req), roomId, store)
+    res.status(204).end()
+  }
 }
 
 export async function listShares(req: Request, res: Response) {

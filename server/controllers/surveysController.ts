@@ -2,6 +2,7 @@ import type { Request, Response } from 'express'
 import { currentUserId } from '../middleware/requireAuth'
 import * as surveys from '../services/surveysService'
 import type { CreateSurveyBody, UpdateSurveyBody } from '../../shared/api/surveys'
+import type { ObjectStore } from '../storage/createObjectStore'
 
 export async function list(req: Request, res: Response) {
   const { roomId } = req.params as unknown as { roomId: number }
@@ -23,8 +24,10 @@ export async function update(req: Request, res: Response) {
   res.json(await surveys.updateSurvey(currentUserId(req), surveyId, req.body as UpdateSurveyBody))
 }
 
-export async function remove(req: Request, res: Response) {
-  const { surveyId } = req.params as unknown as { surveyId: number }
-  await surveys.deleteSurvey(currentUserId(req), surveyId)
-  res.status(204).end()
+export function remove(store: ObjectStore) {
+  return async (req: Request, res: Response) => {
+    const { surveyId } = req.params as unknown as { surveyId: number }
+    await surveys.deleteSurvey(currentUserId(req), surveyId, store)
+    res.status(204).end()
+  }
 }

@@ -1,9 +1,7 @@
-import { mkdtemp, rm, writeFile } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import type { Transaction } from 'sequelize'
 import { Capture, type Survey } from '../models'
-import { storeUploadedFile } from '../storage/storeUploadedFile'
+import type { ObjectStore } from '../storage/createObjectStore'
+import { storeContentBytes } from '../storage/storeContentBytes'
 import { synthesizeRoomImpulse } from '../../shared/acoustics/synthetic/synthesizeRoomImpulse'
 import { encodeWav } from '../../shared/acoustics/wav/encodeWav'
 
@@ -27,52 +25,45 @@ const POSITIONS = [
 const SAMPLE_RATE_HZ = 48_000
 
 /** Writes one synthetic capture per position into storage and the database, status `uploaded`. */
-export async function createDemoCaptures(survey: Survey, condition: keyof typeof DEMO_CONDITIONS, storageDir: string, transaction: Transaction): Promise<void> {
-  const scratch = await mkdtemp(path.join(tmpdir(), 'ringdown-demo-'))
-  try {
-    for (const [index, position] of POSITIONS.entries()) {
-      const { t60S, sideWallReflectionDb } = DEMO_CONDITIONS[condition]
-      const impulse = synthesizeRoomImpulse({
+export async function createDemoCaptures(survey: Survey, condition: keyof typeof DEMO_CONDITIONS, store: ObjectStore, transaction: Transaction): Promise<void> {
+  for (const [index, position] of POSITIONS.entries()) {
+    const { t60S, sideWallReflectionDb } = DEMO_CONDITIONS[condition]
+    const impulse = synthesizeRoomImpulse({
+      sampleRateHz: SAMPLE_RATE_HZ,
+      durationS: 2.5,
+      bandDecays: OCTAVES_HZ.map((centreHz, band) => ({ centreHz, T60S: t60S[band]! })),
+      noiseFloorDb: -88,
+      seed: 1000 + index + (condition === 'bare' ? 0 : 100),
+      directDelayMs: 8,
+      reflections: [{ delayMs: position.sideWallDelayMs, gainDb: sideWallReflectionDb }, { delayMs: 6.8, gainDb: sideWallReflectionDb - 3 }],
+    })
+    const bytes = encodeWav(impulse, { sampleRateHz: SAMPLE_RATE_HZ, encoding: 'pcm24' })
+    const sha256 = await storeContentBytes(store, bytes, transaction)
+    await Capture.create(
+      {
+        surveyId: survey.id,
+        uploadedById: null,
+        kind: 'impulse',
+        sourceLabel: 'Left speaker',
+        receiverLabel: position.receiverLabel,
+        positionXM: position.x,
+        positionYM: position.y,
+        positionZM: position.z,
+        sweepF1Hz: null,
+        sweepF2Hz: null,
+        sweepDurationS: null,
+        referenceSha256: null,
+        originalName: `demo-${condition}-position-${index + 1}.wav`,
+        sha256,
+        byteSize: bytes.length,
         sampleRateHz: SAMPLE_RATE_HZ,
-        durationS: 2.5,
-        bandDecays: OCTAVES_HZ.map((centreHz, band) => ({ centreHz, T60S: t60S[band]! })),
-        noiseFloorDb: -88,
-        seed: 1000 + index + (condition === 'bare' ? 0 : 100),
-        directDelayMs: 8,
-        reflections: [{ delayMs: position.sideWallDelayMs, gainDb: sideWallReflectionDb }, { delayMs: 6.8, gainDb: sideWallReflectionDb - 3 }],
-      })
-      const bytes = encodeWav(impulse, { sampleRateHz: SAMPLE_RATE_HZ, encoding: 'pcm24' })
-      const tempPath = path.join(scratch, `position-${index + 1}.wav`)
-      await writeFile(tempPath, bytes)
-      const { sha256 } = await storeUploadedFile(storageDir, tempPath)
-      await Capture.create(
-        {
-          surveyId: survey.id,
-          uploadedById: null,
-          kind: 'impulse',
-          sourceLabel: 'Left speaker',
-          receiverLabel: position.receiverLabel,
-          positionXM: position.x,
-          positionYM: position.y,
-          positionZM: position.z,
-          sweepF1Hz: null,
-          sweepF2Hz: null,
-          sweepDurationS: null,
-          referenceSha256: null,
-          originalName: `demo-${condition}-position-${index + 1}.wav`,
-          sha256,
-          byteSize: bytes.length,
-          sampleRateHz: SAMPLE_RATE_HZ,
-          bitDepth: 24,
-          channelCount: 1,
-          durationS: impulse.length / SAMPLE_RATE_HZ,
-          status: 'uploaded',
-          statusMessage: 'Waiting for the queue',
-        },
-        { transaction },
-      )
-    }
-  } finally {
-    await rm(scratch, { recursive: true, force: true })
+        bitDepth: 24,
+        channelCount: 1,
+        durationS: impulse.length / SAMPLE_RATE_HZ,
+        status: 'uploaded',
+        statusMessage: 'Waiting for the queue',
+      },
+      { transaction },
+    )
   }
 }

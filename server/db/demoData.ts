@@ -3,6 +3,7 @@ import { Membership, Room, RoomShare, Survey, User, Workspace } from '../models'
 import { hashPassword } from '../services/authService'
 import { createDemoCaptures } from './demoCaptures'
 import type { Role } from '../../shared/api/common'
+import type { ObjectStore } from '../storage/createObjectStore'
 
 /**
  * Demo data: an invented scenario. The consultancy, the people, the rooms and every figure here
@@ -23,7 +24,7 @@ const DEMO_WORKSPACE = 'Demo Consultancy (invented)'
  * Inserts the demo workspace once; running it again changes nothing. Returns whether it wrote.
  * The demo captures are left `uploaded`: the server queues them at start and the worker analyses them.
  */
-export async function seedDemoData(sequelize: Sequelize, options: { storageDir: string }): Promise<boolean> {
+export async function seedDemoData(sequelize: Sequelize, options: { store: ObjectStore }): Promise<boolean> {
   if (await User.findOne({ where: { email: DEMO_ACCOUNTS[0]!.email } })) return false
   const passwordHash = await hashPassword(DEMO_PASSWORD)
   await sequelize.transaction(async (transaction) => {
@@ -78,8 +79,8 @@ export async function seedDemoData(sequelize: Sequelize, options: { storageDir: 
       { roomId: studio.id, name: 'After panels and bass traps', measuredOn: '2026-10-26', temperatureC: 19.0, humidityPercent: 52, treatmentDescription: 'Broadband panels at the first-reflection points, ceiling cloud, corner bass traps.' },
       { transaction },
     )
-    await createDemoCaptures(bare, 'bare', options.storageDir, transaction)
-    await createDemoCaptures(treated, 'treated', options.storageDir, transaction)
+    await createDemoCaptures(bare, 'bare', options.store, transaction)
+    await createDemoCaptures(treated, 'treated', options.store, transaction)
   })
   return true
 }

@@ -1,5 +1,4 @@
 import { Router, type RequestHandler } from 'express'
-import { rm } from 'node:fs/promises'
 import { z } from 'zod'
 import * as captures from '../controllers/capturesController'
 import { validate } from '../middleware/validate'
@@ -8,21 +7,26 @@ import { captureUpload } from '../middleware/upload'
 import { idParam } from '../../shared/api/common'
 import { createCaptureFieldsSchema } from '../../shared/api/captures'
 import type { AnalysisQueue } from '../queue/analysisQueue'
+import type { ObjectStore } from '../storage/createObjectStore'
+import type { IncomingUpload } from '../storage/incomingUploadStorage'
+import { discardUploads } from '../storage/commitUploads'
 
 const surveyParams = z.object({ surveyId: idParam })
 const captureParams = z.object({ captureId: idParam })
 
-/** Removes the uploaded temporary files when the form fields fail validation. */
-const validateFieldsOrDiscard: RequestHandler = (req, res, next) => {
-  try {
-    validate({ body: createCaptureFieldsSchema })(req, res, next)
-  } catch (error) {
-    const files = Object.values((req.files ?? {}) as Record<string, Express.Multer.File[]>).flat()
-    void Promise.all(files.map((file) => rm(file.path, { force: true }))).finally(() => next(error))
+/** Removes the uploaded temporary objects when the form fields fail validation. */
+function validateFieldsOrDiscard(store: ObjectStore): RequestHandler {
+  return (req, res, next) => {
+    try {
+      validate({ body: createCaptureFieldsSchema })(req, res, next)
+    } catch (error) {
+      const files = Object.values((req.files ?? {}) as unknown as Record<string, IncomingUpload[]>).flat()
+      void discardUploads(store, files).finally(() => next(error))
+    }
   }
 }
 
-export function capturesRouter(context: { storageDir: string; uploadLimitMb: number; queue: AnalysisQueue }) {
+export function capturesRouter(context: { store: ObjectStore; uploadLimitMb: number; queue: AnalysisQueue }) {
   const router = Router()
   router.get('/surveys/:surveyId/captures', requireAuth, validate({ params: surveyParams }), captures.list)
   router.post(
@@ -30,12 +34,12 @@ export function capturesRouter(context: { storageDir: string; uploadLimitMb: num
     requireAuth,
     validate({ params: surveyParams }),
     captures.authoriseUpload,
-    captureUpload(context.storageDir, context.uploadLimitMb),
-    validateFieldsOrDiscard,
+    captureUpload(context.store, context.uploadLimitMb),
+    validateFieldsOrDiscard(context.store),
     captures.create(context),
   )
   router.get('/captures/:captureId', requireAuth, validate({ params: captureParams }), captures.show)
   router.get('/captures/:captureId/analysis', requireAuth, validate({ params: captureParams, query: z.object({ analysisId: idParam.optional() }) }), captures.latestAnalysis)
-  router.delete('/captures/:captureId', requireAuth, validate({ params: captureParams }), captures.remove(context.storageDir))
+  router.delete('/captures/:captureId', requireAuth, validate({ params: captureParams }), captures.remove(context.store))
   return router
 }

@@ -7,16 +7,17 @@ import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
 import { shareRoomBodySchema, updateRoomBodySchema } from '../../shared/api/rooms'
 import { createSurveyBodySchema } from '../../shared/api/surveys'
+import type { ObjectStore } from '../storage/createObjectStore'
 
 const roomParams = z.object({ roomId: idParam })
 const shareParams = z.object({ roomId: idParam, userId: idParam })
 
-export function roomsRouter() {
+export function roomsRouter(context: { store: ObjectStore }) {
   const router = Router()
   router.use(requireAuth)
   router.get('/:roomId', validate({ params: roomParams }), rooms.show)
   router.patch('/:roomId', validate({ params: roomParams, body: updateRoomBodySchema }), rooms.update)
-  router.delete('/:roomId', validate({ params: roomParams }), rooms.remove)
+  router.delete('/:roomId', validate({ params: roomParams }), rooms.remove(context.store))
   router.get('/:roomId/shares', validate({ params: roomParams }), rooms.listShares)
   router.post('/:roomId/shares', validate({ params: roomParams, body: shareRoomBodySchema }), rooms.share)
   router.delete('/:roomId/shares/:userId', validate({ params: shareParams }), rooms.unshare)

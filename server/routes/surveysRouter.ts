@@ -5,14 +5,15 @@ import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
 import { updateSurveyBodySchema } from '../../shared/api/surveys'
+import type { ObjectStore } from '../storage/createObjectStore'
 
 const surveyParams = z.object({ surveyId: idParam })
 
-export function surveysRouter() {
+export function surveysRouter(context: { store: ObjectStore }) {
   const router = Router()
   router.use(requireAuth)
   router.get('/:surveyId', validate({ params: surveyParams }), surveys.show)
   router.patch('/:surveyId', validate({ params: surveyParams, body: updateSurveyBodySchema }), surveys.update)
-  router.delete('/:surveyId', validate({ params: surveyParams }), surveys.remove)
+  router.delete('/:surveyId', validate({ params: surveyParams }), surveys.remove(context.store))
   return router
 }

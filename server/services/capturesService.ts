@@ -1,12 +1,15 @@
-import { readFile, rm } from 'node:fs/promises'
 import { Analysis, Capture } from '../models'
 import { ForbiddenError, NotFoundError, ValidationError } from '../errors'
 import { requireSurveyAccess } from './surveysService'
 import { requireRoomAccess } from '../policy/roomAccess'
 import { mayOnRoom } from '../policy/policy'
-import { storeUploadedFile } from '../storage/storeUploadedFile'
-import { contentPath } from '../storage/contentPath'
+import { commitUploads, discardUploads } from '../storage/commitUploads'
+import { releaseQueuedContent } from '../storage/releaseContent'
+import { HEADER_SPOOL_BYTES, type IncomingUpload } from '../storage/incomingUploadStorage'
+import type { ObjectStore } from '../storage/createObjectStore'
+import { findChunkStart } from '../../shared/acoustics/wav/findChunkStart'
 import { readWavFacts } from '../../shared/acoustics/wav/readWavFacts'
+import { checkReferenceSweep } from '../../shared/acoustics/sweep/checkReferenceSweep'
 import { DspInputError } from '../../shared/acoustics/errors'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { AnalysisDto, CaptureDto, CaptureHeadline, CreateCaptureFields } from '../../shared/api/captures'
@@ -16,11 +19,8 @@ import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../shared/jobs/anal
 import { logger } from '../logger'
 import { recordActivity } from './activityService'
 
-export interface UploadedFile {
-  path: string
-  originalname: string
-  size: number
-}
+/** An uploaded file as the upload middleware hands it over: in a temporary object, hashed. */
+export type UploadedFile = IncomingUpload
 
 export function toCaptureDto(capture: Capture): CaptureDto {
   return {
@@ -53,19 +53,37 @@ export function toCaptureDto(capture: Capture): CaptureDto {
 }
 
 /**
- * Reads a WAV's header facts. The whole file is read because wavefile parses the container from
- * one buffer; a streaming header reader would keep large uploads out of memory (noted for later).
+ * The upload's WAV header facts, read from the first bytes kept while it streamed to storage
+ * (the whole length is known by then, so a truncated data chunk is still caught).
  */
-async function wavFactsOfFile(file: UploadedFile, field: 'file' | 'reference') {
+function wavFactsOfFile(file: UploadedFile, field: 'file' | 'reference') {
+  const label = field === 'file' ? 'The file' : 'The reference sweep'
   try {
-    return readWavFacts(new Uint8Array(await readFile(file.path)))
+    return readWavFacts(file.headBytes, file.size)
   } catch (error) {
-    if (error instanceof DspInputError) {
-      const label = field === 'file' ? 'The file' : 'The reference sweep'
-      throw new ValidationError(`${label}: ${error.message}`, { [field]: error.message })
+    if (!(error instanceof DspInputError)) throw error
+    const isLittleEndian = String.fromCharCode(...file.headBytes.subarray(0, 4)) !== 'RIFX'
+    if (file.size > HEADER_SPOOL_BYTES && findChunkStart(file.headBytes, 'data', isLittleEndian) === null) {
+      const message = `its header chunks before the audio are larger than ${HEADER_SPOOL_BYTES / 1024 / 1024} MB (embedded pictures or notes); export the WAV without them.`
+      throw new ValidationError(`${label}: ${message}`, { [field]: message })
     }
-    throw error
+    throw new ValidationError(`${label}: ${error.message}`, { [field]: error.message })
   }
+}
+
+/** A reference sweep must match the recording (rate, length): the engine cannot tell otherwise. */
+function checkReferenceAgainstRecording(recording: { sampleRateHz: number; frameCount: number }, reference: { sampleRateHz: number; frameCount: number }): void {
+  try {
+    checkReferenceSweep(recording, reference)
+  } catch (error) {
+    if (!(error instanceof DspInputError)) throw error
+    throw new ValidationError(error.message, { reference: error.message })
+  }
+}
+
+/** Control characters never belong in a displayed file name (a NUL is refused earlier). */
+function cleanFileName(name: string): string {
+  return name.replace(/[\u0000-\u001f\u007f]+/g, ' ').trim().slice(0, 255) || 'capture.wav'
 }
 
 /** Checks, before any byte is accepted, that the caller may add captures to the survey. */
@@ -74,19 +92,19 @@ export async function assertMayAddCapture(userId: number, surveyId: number): Pro
 }
 
 /**
- * Validates the uploaded WAV(s), stores them content-addressed, writes the capture row and enqueues
- * its analysis. On any failure nothing is left behind: temporary files are removed, and a newly
- * stored file is removed again when its row could not be written. When Redis is down the capture
- * stays `uploaded` and {@link requeueUploadedCaptures} queues it once Redis is back.
+ * Validates the uploaded WAV(s) (already streamed to temporary objects), stores them
+ * content-addressed, writes the capture row and enqueues its analysis. On any failure nothing is
+ * left behind: temporary objects are removed, and newly stored content is released again when its
+ * row could not be written. When Redis is down the capture stays `uploaded` and
+ * {@link requeueUploadedCaptures} queues it once Redis is back.
  */
 export async function createCapture(
   userId: number,
   surveyId: number,
   fields: CreateCaptureFields,
   files: { file?: UploadedFile; reference?: UploadedFile },
-  context: { storageDir: string; queue: AnalysisQueue },
+  context: { store: ObjectStore; queue: AnalysisQueue },
 ): Promise<CaptureDto> {
-  const newlyStored: string[] = []
   try {
     const { room } = await requireSurveyAccess(userId, surveyId, 'capture:create')
     if (!files.file) throw new ValidationError('Choose a WAV file to upload.', { file: 'Choose a WAV file to upload.' })
@@ -96,40 +114,44 @@ export async function createCapture(
       const message = 'A sweep recording needs its sweep parameters (f1, f2, duration) or a reference sweep file.'
       throw new ValidationError(message, { sweepF1Hz: message })
     }
-    const facts = await wavFactsOfFile(files.file, 'file')
+    const facts = wavFactsOfFile(files.file, 'file')
     if (fields.channel >= facts.channelCount) {
       const message = `Channel ${fields.channel} does not exist: the file has ${facts.channelCount} channel(s), numbered from 0.`
       throw new ValidationError(message, { channel: message })
     }
-    if (files.reference) await wavFactsOfFile(files.reference, 'reference')
-    const stored = await storeUploadedFile(context.storageDir, files.file.path)
-    if (stored.isNew) newlyStored.push(stored.sha256)
-    const reference = files.reference ? await storeUploadedFile(context.storageDir, files.reference.path) : null
-    if (reference?.isNew) newlyStored.push(reference.sha256)
-    const capture = await Capture.create({
-      ...fields,
-      surveyId,
-      uploadedById: userId,
-      referenceSha256: reference?.sha256 ?? null,
-      originalName: files.file.originalname.slice(0, 255),
-      sha256: stored.sha256,
-      byteSize: files.file.size,
-      sampleRateHz: facts.sampleRateHz,
-      bitDepth: facts.bitDepth,
-      channelCount: facts.channelCount,
-      durationS: facts.durationS,
-      status: 'uploaded',
-      statusMessage: 'Waiting for the queue',
-    })
-    newlyStored.length = 0
+    if (files.reference) checkReferenceAgainstRecording(facts, wavFactsOfFile(files.reference, 'reference'))
+    if (fields.kind === 'sweep' && !files.reference && fields.sweepDurationS !== null && facts.durationS < fields.sweepDurationS) {
+      const message = `The recording (${facts.durationS.toFixed(2)} s) is shorter than the sweep (${fields.sweepDurationS} s); record the whole sweep and the decay after it.`
+      throw new ValidationError(message, { sweepDurationS: message })
+    }
+    const file = files.file
+    const reference = files.reference
+    const capture = await commitUploads(context.store, reference ? [file, reference] : [file], (transaction) =>
+      Capture.create(
+        {
+          ...fields,
+          surveyId,
+          uploadedById: userId,
+          referenceSha256: reference?.sha256 ?? null,
+          originalName: cleanFileName(file.originalname),
+          sha256: file.sha256,
+          byteSize: file.size,
+          sampleRateHz: facts.sampleRateHz,
+          bitDepth: facts.bitDepth,
+          channelCount: facts.channelCount,
+          durationS: facts.durationS,
+          status: 'uploaded',
+          statusMessage: 'Waiting for the queue',
+        },
+        { transaction },
+      ),
+    )
     await enqueueCapture(capture, context.queue)
     await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.uploaded', summary: `uploaded ${capture.originalName} (${capture.receiverLabel || 'no position label'})` })
     return toCaptureDto(capture)
   } catch (error) {
-    await Promise.all(newlyStored.map((sha) => rm(contentPath(context.storageDir, sha), { force: true })))
+    await discardUploads(context.store, [files.file, files.reference])
     throw error
-  } finally {
-    await Promise.all([files.file, files.reference].filter(Boolean).map((f) => rm(f!.path, { force: true })))
   }
 }
 
@@ -191,16 +213,18 @@ export async function getCapture(userId: number, captureId: number): Promise<Cap
   return { ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }
 }
 
-/** Owners and engineers delete any capture; a client only the ones they uploaded. */
-export async function deleteCapture(userId: number, captureId: number, storageDir: string): Promise<void> {
+/**
+ * Owners and engineers delete any capture; a client only the ones they uploaded. Its stored files
+ * (recording and reference sweep) are removed once no other row names the same content.
+ */
+export async function deleteCapture(userId: number, captureId: number, store: ObjectStore): Promise<void> {
   const { capture, role, isShared, room } = await requireCaptureAccess(userId, captureId)
   const mayDeleteAny = mayOnRoom(role, isShared, 'capture:delete-any')
   const mayDeleteOwn = mayOnRoom(role, isShared, 'capture:create') && capture.uploadedById === userId
   if (!mayDeleteAny && !mayDeleteOwn) throw new ForbiddenError('You may delete only captures you uploaded.')
   await capture.destroy()
   await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.deleted', summary: `deleted ${capture.originalName}` })
-  const stillUsed = await Capture.count({ where: { sha256: capture.sha256 } })
-  if (stillUsed === 0) await rm(contentPath(storageDir, capture.sha256), { force: true })
+  await releaseQueuedContent(store)
 }
 
 /** The newest analysis of a capture, or the one asked for by id. */

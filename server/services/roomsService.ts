@@ -5,6 +5,8 @@ import { mayInWorkspace } from '../policy/policy'
 import { requireMembershipRole } from './membershipLookup'
 import { ValidationError } from '../errors'
 import { recordActivity } from './activityService'
+import { releaseQueuedContent } from '../storage/releaseContent'
+import type { ObjectStore } from '../storage/createObjectStore'
 import type { CreateRoomBody, RoomDto, UpdateRoomBody } from '../../shared/api/rooms'
 import type { Role } from '../../shared/api/common'
 
@@ -82,8 +84,10 @@ export async function updateRoom(userId: number, roomId: number, body: UpdateRoo
   return toRoomDto(room, role, isShared, (await surveyFacts([room.id])).get(room.id))
 }
 
-export async function deleteRoom(userId: number, roomId: number): Promise<void> {
+/** Deletes the room with its surveys and captures, and the stored files no other row uses. */
+export async function deleteRoom(userId: number, roomId: number, store: ObjectStore): Promise<void> {
   const { room } = await requireRoomAccess(userId, roomId, 'room:delete')
   await room.destroy()
+  await releaseQueuedContent(store)
   await recordActivity({ workspaceId: room.workspaceId, roomId: null, userId, action: 'room.deleted', summary: `deleted the room "${room.name}"` })
 }

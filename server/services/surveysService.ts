@@ -5,6 +5,8 @@ import { requireRoomAccess } from '../policy/roomAccess'
 import type { RoomAction } from '../policy/policy'
 import type { CreateSurveyBody, SurveyDto, UpdateSurveyBody } from '../../shared/api/surveys'
 import { recordActivity } from './activityService'
+import { releaseQueuedContent } from '../storage/releaseContent'
+import type { ObjectStore } from '../storage/createObjectStore'
 
 function toSurveyDto(survey: Survey, captureCount: number): SurveyDto {
   return {
@@ -75,8 +77,10 @@ export async function updateSurvey(userId: number, surveyId: number, body: Updat
   return toSurveyDto(survey, (await captureCounts([survey.id])).get(survey.id) ?? 0)
 }
 
-export async function deleteSurvey(userId: number, surveyId: number): Promise<void> {
+/** Deletes the survey with its captures, and the stored files no other row uses. */
+export async function deleteSurvey(userId: number, surveyId: number, store: ObjectStore): Promise<void> {
   const { survey, room } = await requireSurveyAccess(userId, surveyId, 'survey:delete')
   await survey.destroy()
+  await releaseQueuedContent(store)
   await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'survey.deleted', summary: `deleted the survey "${survey.name}" and its captures` })
 }

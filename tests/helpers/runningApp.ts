@@ -28,7 +28,7 @@ export async function startRunningApp(options: { withWorker?: boolean } = {}): P
     throw new Error('Browser tests need the built client: run `npm run build` first (npm run test:all does).')
   }
   const services = await startTestServices()
-  await seedDemoData(services.sequelize, { storageDir: services.config.STORAGE_DIR })
+  await seedDemoData(services.sequelize, { store: services.store })
   const ringdown = createApp({ ...services, clientDir })
   const server: Server = await new Promise((resolve) => {
     const listening = ringdown.app.listen(0, '127.0.0.1', () => resolve(listening))
@@ -38,8 +38,8 @@ export async function startRunningApp(options: { withWorker?: boolean } = {}): P
   let workerConnection: Redis | null = null
   if (options.withWorker) {
     workerConnection = new Redis(services.config.REDIS_URL, { maxRetriesPerRequest: null })
-    const storageDir = services.config.STORAGE_DIR
-    worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir }), { connection: workerConnection })
+    const { store } = services
+    worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store }), { connection: workerConnection })
     await requeueUploadedCaptures(ringdown.queue)
   }
   return {

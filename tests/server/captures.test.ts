@@ -1,11 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { mkdtemp, readdir, rm, stat } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import { Queue } from 'bullmq'
 import { createApp, type RingdownApp } from '../../server/app'
 import { Capture } from '../../server/models'
-import { contentPath } from '../../server/storage/contentPath'
+import { contentKey } from '../../server/storage/contentKeys'
 import { startTestServices, type TestServices } from '../helpers/testServices'
 import { signedInAgent, type ApiAgent } from '../helpers/apiAgent'
 import { createWorkspaceFixture, FIXTURE_PASSWORD, type WorkspaceFixture } from '../helpers/workspaceFixture'
@@ -14,7 +11,6 @@ import { ANALYSIS_QUEUE_NAME } from '../../shared/jobs/analysisJob'
 
 let services: TestServices
 let ringdown: RingdownApp
-let storageDir: string
 let a: WorkspaceFixture
 let b: WorkspaceFixture
 let engineer: ApiAgent
@@ -22,8 +18,7 @@ let viewer: ApiAgent
 let client: ApiAgent
 
 beforeAll(async () => {
-  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-captures-'))
-  services = await startTestServices({ STORAGE_DIR: storageDir, UPLOAD_LIMIT_MB: 1 })
+  services = await startTestServices({ UPLOAD_LIMIT_MB: 1 })
   ringdown = createApp(services)
   a = await createWorkspaceFixture('Delta')
   b = await createWorkspaceFixture('Epsilon')
@@ -34,14 +29,10 @@ beforeAll(async () => {
 afterAll(async () => {
   await ringdown.close()
   await services.close()
-  await rm(storageDir, { recursive: true, force: true })
 })
 
-/** Every file under the storage root, incoming temporary files included. */
-async function storedFiles(): Promise<string[]> {
-  const entries = await readdir(storageDir, { recursive: true, withFileTypes: true })
-  return entries.filter((e) => e.isFile()).map((e) => path.join(e.parentPath, e.name))
-}
+/** Every object in the test's bucket, temporary uploads included. */
+const storedFiles = () => services.objectKeys()
 
 async function upload(agent: ApiAgent, surveyId: number, bytes: Uint8Array | null, fields: Record<string, string> = { kind: 'impulse' }, name = 'capture.wav') {
   await agent.refreshCsrf()
@@ -93,9 +84,8 @@ describe('POST /api/surveys/:surveyId/captures — a good upload', () => {
     expect(response.status).toBe(202)
     expect(response.body).toMatchObject({ status: 'queued', sampleRateHz: 44_100, bitDepth: 24, channelCount: 1, sourceLabel: 'Left speaker', positionXM: 1.9 })
     expect(response.body.durationS).toBeCloseTo(1, 6)
-    const file = contentPath(storageDir, response.body.sha256)
-    expect((await stat(file)).size).toBe(bytes.length)
-    expect((await storedFiles()).filter((f) => f.includes('incoming'))).toEqual([])
+    expect(await storedFiles()).toEqual([contentKey(response.body.sha256)])
+    expect((await services.store.head(contentKey(response.body.sha256)))?.byteSize).toBe(bytes.length)
     const queue = new Queue(ANALYSIS_QUEUE_NAME, { connection: services.redis })
     const jobs = await queue.getJobs(['waiting', 'delayed', 'prioritized'])
     expect(jobs.filter((job) => job.data.captureId === response.body.id)).toHaveLength(1)

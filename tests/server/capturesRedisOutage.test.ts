@@ -1,7 +1,4 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { mkdtemp, rm } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import { Queue } from 'bullmq'
 import { Redis } from 'ioredis'
 import { createApp, type RingdownApp } from '../../server/app'
@@ -17,12 +14,10 @@ import { decayingNoiseWav } from '../helpers/wavFixtures'
 let services: TestServices
 let outage: RingdownApp
 let deadRedis: Redis
-let storageDir: string
 let fixture: WorkspaceFixture
 
 beforeAll(async () => {
-  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-outage-'))
-  services = await startTestServices({ STORAGE_DIR: storageDir })
+  services = await startTestServices()
   // Nothing listens on loopback port 1: every Redis command waits, as during an outage.
   deadRedis = new Redis('redis://127.0.0.1:1', { maxRetriesPerRequest: null, retryStrategy: () => 500 })
   deadRedis.on('error', () => {})
@@ -33,7 +28,6 @@ afterAll(async () => {
   await outage.close()
   deadRedis.disconnect()
   await services.close()
-  await rm(storageDir, { recursive: true, force: true })
 })
 
 describe('an upload accepted while Redis is down', () => {

@@ -1,42 +1,36 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { mkdtemp, rm, stat } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import { Capture, Room, Survey, User } from '../../server/models'
 import { seedDemoData } from '../../server/db/demoData'
-import { contentPath } from '../../server/storage/contentPath'
+import { contentKey } from '../../server/storage/contentKeys'
 import { processAnalysisJob } from '../../worker/processAnalysisJob'
 import { compareSurveys } from '../../server/services/comparisonService'
 import { startTestServices, type TestServices } from '../helpers/testServices'
 
 let services: TestServices
-let storageDir: string
 
 beforeAll(async () => {
-  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-demo-test-'))
-  services = await startTestServices({ STORAGE_DIR: storageDir })
+  services = await startTestServices()
 })
 afterAll(async () => {
   await services.close()
-  await rm(storageDir, { recursive: true, force: true })
 })
 
 describe('seedDemoData', () => {
   it('writes the invented scenario once, with three stored captures per demo survey', async () => {
-    expect(await seedDemoData(services.sequelize, { storageDir })).toBe(true)
-    expect(await seedDemoData(services.sequelize, { storageDir })).toBe(false)
+    expect(await seedDemoData(services.sequelize, { store: services.store })).toBe(true)
+    expect(await seedDemoData(services.sequelize, { store: services.store })).toBe(false)
     expect(await User.count()).toBe(4)
     const captures = await Capture.findAll()
     expect(captures).toHaveLength(6)
     for (const capture of captures) {
       expect(capture.status).toBe('uploaded')
-      expect((await stat(contentPath(storageDir, capture.sha256))).size).toBe(Number(capture.byteSize))
+      expect((await services.store.head(contentKey(capture.sha256)))?.byteSize).toBe(Number(capture.byteSize))
     }
   })
 
   it('gives a comparison in which the treatment brings the mid bands inside the EBU Tech 3276 mask once analysed', async () => {
     for (const capture of await Capture.findAll()) {
-      await processAnalysisJob({ data: { captureId: capture.id }, attemptsMade: 0, opts: { attempts: 1 }, updateProgress: async () => {} }, { storageDir })
+      await processAnalysisJob({ data: { captureId: capture.id }, attemptsMade: 0, opts: { attempts: 1 }, updateProgress: async () => {} }, { store: services.store })
     }
     const room = (await Room.findOne({ where: { name: 'Garden studio control room' } }))!
     const surveys = await Survey.findAll({ where: { roomId: room.id }, order: [['measuredOn', 'ASC']] })

@@ -25,11 +25,11 @@ let after: Survey
 beforeAll(async () => {
   scratch = await mkdtemp(path.join(tmpdir(), 'ringdown-reports-'))
   inbox = await startFakeSmtpInbox({ port: 0, mailDir: path.join(scratch, 'mail') })
-  services = await startTestServices({ STORAGE_DIR: path.join(scratch, 'files'), PUBLIC_URL: 'http://ringdown.test' })
+  services = await startTestServices({ PUBLIC_URL: 'http://ringdown.test' })
   ringdown = createApp({ ...services, mailer: createSmtpMailer(`smtp://127.0.0.1:${inbox.port}`, 'Ringdown <no-reply@ringdown.invalid>') })
   a = await createWorkspaceFixture('Nu')
-  before = await createAnalysedSurvey(a.sharedRoom, { name: 'Bare room', t60S: 0.6, positions: 2, storageDir: path.join(scratch, 'files'), seed: 21 })
-  after = await createAnalysedSurvey(a.sharedRoom, { name: 'After panels', t60S: 0.2, positions: 2, storageDir: path.join(scratch, 'files'), seed: 31 })
+  before = await createAnalysedSurvey(a.sharedRoom, { name: 'Bare room', t60S: 0.6, positions: 2, store: services.store, seed: 21 })
+  after = await createAnalysedSurvey(a.sharedRoom, { name: 'After panels', t60S: 0.2, positions: 2, store: services.store, seed: 31 })
   engineer = await signedInAgent(ringdown.app, a.users.engineer.email, FIXTURE_PASSWORD)
 }, 120_000)
 afterAll(async () => {

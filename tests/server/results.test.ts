@@ -1,7 +1,4 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { mkdtemp, rm } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import request from 'supertest'
 import { createApp, type RingdownApp } from '../../server/app'
 import { Analysis, Room, type Survey } from '../../server/models'
@@ -13,7 +10,6 @@ import { createAnalysedSurvey } from '../helpers/analysedSurveys'
 
 let services: TestServices
 let ringdown: RingdownApp
-let storageDir: string
 let a: WorkspaceFixture
 let b: WorkspaceFixture
 let engineer: ApiAgent
@@ -25,13 +21,12 @@ let after: Survey
 // A 5 × 4 × 2.5 m control room: V = 50 m³, so the EBU Tech 3276 mean is Tm = 0.25·(50/100)^(1/3)
 // = 0.198 s with ±0.05 s from 200 Hz to 4 kHz (facts §9, tolerance shape from memory — verify).
 beforeAll(async () => {
-  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-results-'))
-  services = await startTestServices({ STORAGE_DIR: storageDir })
+  services = await startTestServices()
   ringdown = createApp(services)
   a = await createWorkspaceFixture('Theta')
   b = await createWorkspaceFixture('Iota')
-  before = await createAnalysedSurvey(a.sharedRoom, { name: 'Bare room', t60S: 0.6, positions: 2, storageDir, seed: 1 })
-  after = await createAnalysedSurvey(a.sharedRoom, { name: 'After panels', t60S: 0.2, positions: 2, storageDir, seed: 10 })
+  before = await createAnalysedSurvey(a.sharedRoom, { name: 'Bare room', t60S: 0.6, positions: 2, store: services.store, seed: 1 })
+  after = await createAnalysedSurvey(a.sharedRoom, { name: 'After panels', t60S: 0.2, positions: 2, store: services.store, seed: 10 })
   engineer = await signedInAgent(ringdown.app, a.users.engineer.email, FIXTURE_PASSWORD)
   viewer = await signedInAgent(ringdown.app, a.users.viewer.email, FIXTURE_PASSWORD)
   outsider = await signedInAgent(ringdown.app, b.users.owner.email, FIXTURE_PASSWORD)
@@ -39,7 +34,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await ringdown.close()
   await services.close()
-  await rm(storageDir, { recursive: true, force: true })
 })
 
 describe('GET /api/surveys/:surveyId/summary', () => {

@@ -1,7 +1,4 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { mkdtemp, rm } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import { Worker } from 'bullmq'
 import { Redis } from 'ioredis'
 import { createApp, type RingdownApp } from '../../server/app'
@@ -18,27 +15,24 @@ import { decayingNoiseWav } from '../helpers/wavFixtures'
 
 let services: TestServices
 let ringdown: RingdownApp
-let storageDir: string
 let fixture: WorkspaceFixture
 let engineer: ApiAgent
 let worker: Worker<AnalysisJobPayload>
 let workerConnection: Redis
 
 beforeAll(async () => {
-  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-worker-'))
-  services = await startTestServices({ STORAGE_DIR: storageDir })
+  services = await startTestServices()
   ringdown = createApp(services)
   fixture = await createWorkspaceFixture('Zeta')
   engineer = await signedInAgent(ringdown.app, fixture.users.engineer.email, FIXTURE_PASSWORD)
   workerConnection = new Redis(services.config.REDIS_URL, { maxRetriesPerRequest: null })
-  worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir }), { connection: workerConnection })
+  worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store: services.store }), { connection: workerConnection })
 })
 afterAll(async () => {
   await worker.close()
   await workerConnection.quit()
   await ringdown.close()
   await services.close()
-  await rm(storageDir, { recursive: true, force: true })
 })
 
 async function uploadAndWait(bytes: Uint8Array): Promise<Capture> {
@@ -77,7 +71,7 @@ describe('upload → queue → worker → analysis', () => {
   it('stores one analysis when the same job runs twice (idempotent retry)', async () => {
     const capture = await uploadAndWait(decayingNoiseWav({ seed: 11 }))
     const rerun = { data: { captureId: capture.id }, attemptsMade: 1, opts: { attempts: 3 }, updateProgress: async () => {} }
-    await processAnalysisJob(rerun, { storageDir })
+    await processAnalysisJob(rerun, { store: services.store })
     expect(await Analysis.count({ where: { captureId: capture.id } })).toBe(1)
   })
 })

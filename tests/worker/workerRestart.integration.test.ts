@@ -1,10 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { spawn, type ChildProcess } from 'node:child_process'
-import { mkdtemp, rm, writeFile } from 'node:fs/promises'
-import { tmpdir } from 'node:os'
-import path from 'node:path'
 import { Analysis, Capture } from '../../server/models'
-import { storeUploadedFile } from '../../server/storage/storeUploadedFile'
+import { storeContentBytes } from '../../server/storage/storeContentBytes'
 import { createAnalysisQueue, type AnalysisQueue } from '../../server/queue/analysisQueue'
 import { settingsToKey, DEFAULT_ANALYSIS_SETTINGS } from '../../shared/jobs/analysisSettingsKey'
 import { synthesizeRoomImpulse } from '../../shared/acoustics/synthetic/synthesizeRoomImpulse'
@@ -13,14 +10,13 @@ import { startTestServices, type TestServices } from '../helpers/testServices'
 import { createWorkspaceFixture } from '../helpers/workspaceFixture'
 
 let services: TestServices
-let storageDir: string
 let queue: AnalysisQueue
 const workers: ChildProcess[] = []
 
 /** A real `npm run worker` process, with a short lock so a killed job is picked up in seconds. */
 function startWorkerProcess(): ChildProcess {
   const child = spawn(process.execPath, ['--import', 'tsx', 'worker/index.ts'], {
-    env: { ...process.env, STORAGE_DIR: storageDir, WORKER_LOCK_DURATION_MS: '1500', WORKER_STALLED_INTERVAL_MS: '1000', LOG_LEVEL: 'silent' },
+    env: { ...process.env, S3_BUCKET: services.config.S3_BUCKET, WORKER_LOCK_DURATION_MS: '1500', WORKER_STALLED_INTERVAL_MS: '1000', LOG_LEVEL: 'silent' },
     stdio: 'ignore',
   })
   workers.push(child)
@@ -38,15 +34,13 @@ async function waitFor<T>(probe: () => Promise<T | null>, timeoutMs: number, pol
 }
 
 beforeAll(async () => {
-  storageDir = await mkdtemp(path.join(tmpdir(), 'ringdown-restart-'))
-  services = await startTestServices({ STORAGE_DIR: storageDir })
+  services = await startTestServices()
   queue = createAnalysisQueue(services.redis)
 })
 afterAll(async () => {
   for (const child of workers) child.kill('SIGKILL')
   await queue.close()
   await services.close()
-  await rm(storageDir, { recursive: true, force: true })
 })
 
 describe('a worker killed in the middle of a job', () => {
@@ -55,9 +49,7 @@ describe('a worker killed in the middle of a job', () => {
     // A long, high-rate capture in third-octave bands keeps the worker busy for a second or more.
     const sampleRateHz = 96_000
     const impulse = synthesizeRoomImpulse({ sampleRateHz, durationS: 20, bandDecays: [63, 125, 250, 500, 1000, 2000, 4000, 8000].map((centreHz) => ({ centreHz, T60S: 1.2 })), noiseFloorDb: -90, seed: 3 })
-    const tempPath = path.join(storageDir, 'long.wav')
-    await writeFile(tempPath, encodeWav(impulse, { sampleRateHz, encoding: 'float32' }))
-    const { sha256 } = await storeUploadedFile(storageDir, tempPath)
+    const sha256 = await storeContentBytes(services.store, encodeWav(impulse, { sampleRateHz, encoding: 'float32' }))
     const capture = await Capture.create({
       surveyId: fixture.sharedSurvey.id, uploadedById: null, kind: 'impulse', positionXM: null, positionYM: null, positionZM: null,
       sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256: null, originalName: 'long.wav', sha256,

@@ -73,9 +73,11 @@ function unsupported(what: string): never {
 /**
  * Parses and checks a WAV header (RIFF/RIFX/RF64 via wavefile): container, fmt chunk, encoding,
  * sample rate (22.05–192 kHz) and the data chunk's declared size against the bytes present.
+ * @param bytes the whole file, or its first bytes when `fileByteCount` gives the whole length (an
+ *   upload checked while it streams); the header chunks must lie inside them
  * @throws WavDecodeError 'not-wav' | 'truncated' | 'unsupported-encoding' | 'unsupported-rate' | 'no-samples'
  */
-export function readWavHeader(bytes: Uint8Array): WavHeader {
+export function readWavHeader(bytes: Uint8Array, fileByteCount = bytes.length): WavHeader {
   const wav = parseContainer(bytes)
   const fmt = wav.fmt as unknown as FmtChunk
   const isLittleEndian = wav.container !== 'RIFX'
@@ -90,8 +92,8 @@ export function readWavHeader(bytes: Uint8Array): WavHeader {
     throw new WavDecodeError('unsupported-rate', `The sample rate is ${fmt.sampleRate} Hz; use 22 050 Hz to 192 000 Hz.`)
   }
   const frameBytes = (fmt.bitsPerSample / 8) * fmt.numChannels
-  if (declaredDataBytes > bytes.length - dataStartByte) {
-    throw new WavDecodeError('truncated', `The WAV file is truncated: its data chunk declares ${declaredDataBytes} bytes but only ${Math.max(0, bytes.length - dataStartByte)} are present. Upload the complete file.`)
+  if (declaredDataBytes > fileByteCount - dataStartByte) {
+    throw new WavDecodeError('truncated', `The WAV file is truncated: its data chunk declares ${declaredDataBytes} bytes but only ${Math.max(0, fileByteCount - dataStartByte)} are present. Upload the complete file.`)
   }
   const frameCount = Math.floor(declaredDataBytes / frameBytes)
   if (frameCount === 0) throw new WavDecodeError('no-samples', 'The WAV file contains no samples.')
