@@ -5,6 +5,7 @@ import { requireRoomAccess } from '../policy/roomAccess'
 import type { RoomAction } from '../policy/policy'
 import type { CreateSurveyBody, SurveyDto, UpdateSurveyBody } from '../../shared/api/surveys'
 import { recordActivity } from './activityService'
+import { surveyAnalysisSettings } from './countingAnalyses'
 
 function toSurveyDto(survey: Survey, captureCount: number): SurveyDto {
   return {
@@ -15,6 +16,8 @@ function toSurveyDto(survey: Survey, captureCount: number): SurveyDto {
     temperatureC: survey.temperatureC,
     humidityPercent: survey.humidityPercent,
     treatmentDescription: survey.treatmentDescription,
+    analysisSettings: surveyAnalysisSettings(survey),
+    equipment: { microphone: '', loudspeaker: '', audioInterface: '', ...(survey.equipment ?? {}) },
     captureCount,
     createdAt: survey.createdAt.toISOString(),
     updatedAt: survey.updatedAt.toISOString(),
