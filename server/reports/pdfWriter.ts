@@ -40,9 +40,11 @@ export class PdfWriter {
   private draw(target: PDFKit.PDFDocument, text: string, x: number, y: number, width: number, style: TextStyle): void {
     const runs = splitIntoRuns(text.length > 0 ? text : ' ', style.bold ? 'bold' : 'regular')
     target.fillColor(style.color ?? '#222222').fontSize(style.size)
+    // PDFKit places continued runs of different fonts correctly only in left-aligned text.
+    const align = runs.length > 1 ? 'left' : (style.align ?? 'left')
     runs.forEach((run, i) => {
       this.use(target, run.face)
-      const options = { width, align: style.align ?? 'left', continued: i < runs.length - 1, lineGap: 1 }
+      const options = { width, align, continued: i < runs.length - 1, lineGap: 1 }
       if (i === 0) target.text(run.text, x, y, options)
       else target.text(run.text, options)
     })

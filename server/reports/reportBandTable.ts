@@ -38,7 +38,7 @@ export function drawBandTable(writer: PdfWriter, comparison: ComparisonDto): voi
       { header: `${surveyKey(i)} T (s)`, width: perSurvey * 0.55, align: 'right' as const },
       { header: `${surveyKey(i)} σ (s)`, width: perSurvey * 0.45, align: 'right' as const },
     ]),
-    { header: `Change ${surveyKey(0)}→${surveyKey(count - 1)} (s)`, width: fixed.change, align: 'right' },
+    { header: 'Change (s)', width: fixed.change, align: 'right' },
     { header: 'Target (s)', width: fixed.target, align: 'right' },
     { header: `Verdict ${surveyKey(count - 1)}`, width: fixed.verdict },
   ]
@@ -59,5 +59,5 @@ export function drawBandTable(writer: PdfWriter, comparison: ComparisonDto): voi
     ]
   })
   drawTable(writer, columns, rows)
-  writer.write('T: mean T30 over the positions used (T20 where T30 was flagged). * not reliable: a position flagged the value, so the band is not judged. n/a: no position analysed in this band. σ: standard uncertainty of the mean (ISO 3382-2:2008 Annex A).', { size: 7.5, color: '#555555' })
+  writer.write(`T: mean T30 over the positions used (T20 where T30 was flagged). Change: ${surveyKey(count - 1)} minus ${surveyKey(0)}. * not reliable: a position flagged the value, so the band is not judged. n/a: no position analysed in this band. σ: standard uncertainty of the mean (ISO 3382-2:2008 Annex A).`, { size: 7.5, color: '#555555' })
 }
