@@ -39,6 +39,8 @@ export const createSurveyBodySchema = z.object({
   equipment: surveyFields.equipment.default({ microphone: '', loudspeaker: '', audioInterface: '' }),
 })
 export type CreateSurveyBody = z.infer<typeof createSurveyBodySchema>
+/** What a client sends (fields with defaults may be left out). */
+export type CreateSurveyInput = z.input<typeof createSurveyBodySchema>
 
 export const updateSurveyBodySchema = z
   .object(surveyFields)

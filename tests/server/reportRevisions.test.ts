@@ -152,7 +152,7 @@ describe('analyses: who may start them and which one counts', () => {
     const capture = (await engineer.get(`/api/surveys/${before.id}/captures`)).body[0] as { id: number }
     const first = (await engineer.get(`/api/captures/${capture.id}/analysis`)).body
     expect(first).toMatchObject({ isCounting: true, isPinned: false })
-    const settings = { ...DEFAULT_ANALYSIS_SETTINGS, smoothing: 12 }
+    const settings = { ...DEFAULT_ANALYSIS_SETTINGS, smoothing: 12 as const }
     expect((await engineer.post(`/api/captures/${capture.id}/analyses`, settings)).status).toBe(202)
     await analyseInProcess(capture.id, storageDir, settingsToKey(settings))
     const list = (await engineer.get(`/api/captures/${capture.id}/analyses`)).body as { id: number; isCounting: boolean }[]
