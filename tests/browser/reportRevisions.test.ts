@@ -6,7 +6,7 @@ import { startRunningApp, type RunningApp } from '../helpers/runningApp'
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
 import { Capture, Room, Survey } from '../../server/models'
 import { createSmtpMailer } from '../../server/mail/mailer'
-import { startFakeSmtpInbox } from '../../server/mail/fakeSmtpInbox'
+import { readFakeInbox, startFakeSmtpInbox } from '../../server/mail/fakeSmtpInbox'
 import { mkdtempSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 
@@ -16,9 +16,10 @@ let page: Page
 let room: Room
 let surveys: Survey[]
 let inbox: { port: number; close: () => Promise<void> }
+const mailDir = mkdtempSync(path.join(tmpdir(), 'ringdown-browser-mail-'))
 
 beforeAll(async () => {
-  inbox = await startFakeSmtpInbox({ port: 0, mailDir: mkdtempSync(path.join(tmpdir(), 'ringdown-browser-mail-')) })
+  inbox = await startFakeSmtpInbox({ port: 0, mailDir })
   running = await startRunningApp({ withWorker: true, mailer: createSmtpMailer(`smtp://127.0.0.1:${inbox.port}`, 'Ringdown <no-reply@ringdown.invalid>') })
   browser = await launchChromium()
   page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
@@ -104,5 +105,31 @@ describe('a sent report stays as it was sent', () => {
     expect(await page.getByTestId('revision-1-summary').textContent()).toBe(sentSummary)
     await page.getByTestId('report-revisions').scrollIntoViewIfNeeded()
     await page.screenshot({ path: screenshotPath('43-room-draft-after-upload'), fullPage: true })
+  })
+
+  it('shows no internal provenance wording on the room, survey, capture, compare, room model and shared pages', async () => {
+    // Internal provenance markers belong in tests and reference notes only (project rule).
+    const INTERNAL = /from memory|project facts|facts §|§\s?\d|verify against|as transcribed/i
+    const capture = (await Capture.findOne({ where: { surveyId: surveys[1]!.id }, order: [['id', 'ASC']] }))!
+    const mail = (await readFakeInbox(mailDir)).find((m) => m.to.includes('client@example.test'))!
+    const sharedPath = new URL(mail.text.match(/https?:\/\/\S+\/shared\/[A-Za-z0-9_-]+/)![0]).pathname
+    const pages = [
+      `/rooms/${room.id}`,
+      `/rooms/${room.id}/surveys/${surveys[1]!.id}`,
+      `/captures/${capture.id}`,
+      `/rooms/${room.id}/compare?surveys=${surveys.map((s) => s.id).join(',')}&bands=octave`,
+      `/rooms/${room.id}/compare?surveys=${surveys.map((s) => s.id).join(',')}&bands=third`,
+      `/rooms/${room.id}/model`,
+      sharedPath,
+    ]
+    for (const pagePath of pages) {
+      await page.goto(`${running.baseUrl}${pagePath}`)
+      await page.waitForLoadState('networkidle')
+      const text = await page.locator('body').innerText()
+      expect(text.length, pagePath).toBeGreaterThan(200)
+      expect(text, pagePath).not.toMatch(INTERNAL)
+    }
+    await page.screenshot({ path: screenshotPath('44-shared-revision'), fullPage: true })
+    expect(await page.getByTestId('shared-revision').textContent()).toContain('Report revision 1')
   })
 })
