@@ -20,6 +20,7 @@ import { capturesRouter } from './routes/capturesRouter'
 import { resultsRouter } from './routes/resultsRouter'
 import { roomModelRouter } from './routes/roomModelRouter'
 import { invitationsRouter } from './routes/invitationsRouter'
+import { reportInputsRouter } from './routes/reportInputsRouter'
 import { createSmtpMailer, type Mailer } from './mail/mailer'
 import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
@@ -128,6 +129,7 @@ export function createApp({
   app.use('/api', resultsRouter({ queue }))
   app.use('/api', roomModelRouter())
   app.use('/api', invitationsRouter(mail))
+  app.use('/api', reportInputsRouter({ queue }))
   if (!config.SMTP_URL && isLoopback(config.HOST)) {
     // The development mailbox: only while mail goes to the local fake inbox, the server listens on
     // loopback and the request comes from this machine (it shows reset links, so never further).

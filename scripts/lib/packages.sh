@@ -29,8 +29,12 @@ ensure_packages() {
   fi
 }
 
+# The PDF report prints every script a name may contain: Noto Sans (Latin, Greek, Cyrillic and
+# many more scripts) and Noto Sans CJK (Japanese, Chinese, Korean) from Debian.
 ensure_server_packages() {
-  ensure_packages 'postgresql:find_pg_bindir' 'redis-server:command -v redis-server'
+  ensure_packages 'postgresql:find_pg_bindir' 'redis-server:command -v redis-server' \
+    'fonts-noto-core:test -f /usr/share/fonts/truetype/noto/NotoSans-Regular.ttf' \
+    'fonts-noto-cjk:test -f /usr/share/fonts/opentype/noto/NotoSansCJK-Regular.ttc'
 }
 
 ensure_browser_packages() {

@@ -30,7 +30,7 @@ export async function accept(req: Request, res: Response) {
 export function createShareLink(publicUrl: string) {
   return async (req: Request, res: Response) => {
     const { roomId } = req.params as unknown as { roomId: number }
-    res.status(201).json(await shareLinks.createShareLink(currentUserId(req), roomId, req.body as CreateShareLinkBody, publicUrl))
+    res.status(201).json((await shareLinks.createShareLink(currentUserId(req), roomId, req.body as CreateShareLinkBody, publicUrl)).link)
   }
 }
 

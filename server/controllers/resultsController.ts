@@ -32,8 +32,10 @@ export async function comparison(req: Request, res: Response) {
 
 export async function exportCapture(req: Request, res: Response) {
   const { captureId } = req.params as unknown as { captureId: number }
-  const analysis = await getLatestAnalysis(currentUserId(req), captureId)
-  sendExport(res, (req.query as unknown as ExportQuery).format, `ringdown-capture-${captureId}`, analysis, () => analysisToCsv(analysis.result))
+  const { format, analysisId } = req.query as unknown as ExportQuery & { analysisId?: number }
+  // The export follows the analysis shown on the capture page; without one, the analysis that counts.
+  const analysis = await getLatestAnalysis(currentUserId(req), captureId, analysisId)
+  sendExport(res, format, `ringdown-capture-${captureId}-analysis-${analysis.id}`, analysis, () => analysisToCsv(analysis.result))
 }
 
 export async function exportSurvey(req: Request, res: Response) {

@@ -5,6 +5,9 @@ import * as analyses from '../migrations/0002-analyses'
 import * as roomModels from '../migrations/0003-room-models'
 import * as invitationsSharesActivity from '../migrations/0004-invitations-shares-activity'
 import * as contentReferences from '../migrations/0005-content-references'
+import * as customTargetsAndProfiles from '../migrations/0030-custom-targets-and-profiles'
+import * as captureInclusionAndPin from '../migrations/0031-capture-inclusion-and-pin'
+import * as reportRevisions from '../migrations/0032-report-revisions'
 
 /**
  * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
@@ -16,6 +19,9 @@ const MIGRATIONS = [
   { name: '0003-room-models', module: roomModels },
   { name: '0004-invitations-shares-activity', module: invitationsSharesActivity },
   { name: '0005-content-references', module: contentReferences },
+  { name: '0030-custom-targets-and-profiles', module: customTargetsAndProfiles },
+  { name: '0031-capture-inclusion-and-pin', module: captureInclusionAndPin },
+  { name: '0032-report-revisions', module: reportRevisions },
 ]
 
 export function createMigrator(sequelize: Sequelize) {

@@ -19,10 +19,13 @@ export function passwordResetMail(input: { to: string; link: string; expiresAt: 
   }
 }
 
-export function reportReadyMail(input: { to: string; roomName: string; link: string; senderName: string }): OutgoingMail {
+/** The e-mail of a sent report: names the frozen revision and its date, and its verdict line. */
+export function reportReadyMail(input: { to: string; roomName: string; link: string; senderName: string; revisionNumber: number; frozenAt: Date; summaryLine: string | null }): OutgoingMail {
+  const date = input.frozenAt.toISOString().slice(0, 10)
+  const verdict = input.summaryLine ? `\n\nIn short: ${input.summaryLine}` : ''
   return {
     to: input.to,
     subject: `Your acoustic report for ${input.roomName} is ready`,
-    text: `${input.senderName} has prepared the measurement report for ${input.roomName}.\n\nRead it here (no account needed):\n${input.link}${SIGNATURE}`,
+    text: `${input.senderName} has prepared the measurement report for ${input.roomName} (revision ${input.revisionNumber} of ${date}). This revision stays as it was sent.${verdict}\n\nRead it here (no account needed):\n${input.link}${SIGNATURE}`,
   }
 }

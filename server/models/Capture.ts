@@ -27,6 +27,10 @@ export class Capture extends Model<InferAttributes<Capture>, InferCreationAttrib
   declare durationS: number
   declare status: CreationOptional<CaptureStatus>
   declare statusMessage: string | null
+  declare excludedAt: CreationOptional<Date | null>
+  declare exclusionReason: CreationOptional<string | null>
+  declare excludedById: CreationOptional<number | null>
+  declare pinnedAnalysisId: CreationOptional<number | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -56,6 +60,10 @@ export class Capture extends Model<InferAttributes<Capture>, InferCreationAttrib
         durationS: { type: DataTypes.DOUBLE, allowNull: false },
         status: { type: DataTypes.ENUM(...CAPTURE_STATUSES), allowNull: false, defaultValue: 'uploaded' },
         statusMessage: { type: DataTypes.TEXT, allowNull: true },
+        excludedAt: { type: DataTypes.DATE, allowNull: true },
+        exclusionReason: { type: DataTypes.STRING(300), allowNull: true },
+        excludedById: { type: DataTypes.INTEGER, allowNull: true },
+        pinnedAnalysisId: { type: DataTypes.INTEGER, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -12,6 +12,8 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
   declare label: CreationOptional<string>
   declare expiresAt: Date | null
   declare revokedAt: Date | null
+  /** The frozen report revision the link shows; null only for links made before revisions existed. */
+  declare reportRevisionId: CreationOptional<number | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -27,6 +29,7 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
         label: { type: DataTypes.STRING(120), allowNull: false, defaultValue: '' },
         expiresAt: { type: DataTypes.DATE, allowNull: true },
         revokedAt: { type: DataTypes.DATE, allowNull: true },
+        reportRevisionId: { type: DataTypes.INTEGER, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

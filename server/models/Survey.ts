@@ -1,3 +1,4 @@
+import type { SurveyAnalysisSettings, SurveyEquipment } from '../../shared/api/surveys'
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
 
 export class Survey extends Model<InferAttributes<Survey>, InferCreationAttributes<Survey>> {
@@ -9,6 +10,9 @@ export class Survey extends Model<InferAttributes<Survey>, InferCreationAttribut
   declare temperatureC: number | null
   declare humidityPercent: number | null
   declare treatmentDescription: CreationOptional<string>
+  /** Null = the engine's default settings. */
+  declare analysisSettings: CreationOptional<SurveyAnalysisSettings | null>
+  declare equipment: CreationOptional<SurveyEquipment | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -22,6 +26,8 @@ export class Survey extends Model<InferAttributes<Survey>, InferCreationAttribut
         temperatureC: { type: DataTypes.DOUBLE, allowNull: true },
         humidityPercent: { type: DataTypes.DOUBLE, allowNull: true },
         treatmentDescription: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        analysisSettings: { type: DataTypes.JSONB, allowNull: true },
+        equipment: { type: DataTypes.JSONB, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

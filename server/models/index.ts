@@ -13,15 +13,18 @@ import { CustomMaterial } from './CustomMaterial'
 import { PasswordReset } from './PasswordReset'
 import { ShareLink } from './ShareLink'
 import { Activity } from './Activity'
+import { CustomTarget } from './CustomTarget'
+import { WorkspaceProfile } from './WorkspaceProfile'
+import { ReportRevision } from './ReportRevision'
 
-export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity }
+export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, CustomTarget, WorkspaceProfile, ReportRevision }
 
 let initialisedFor: Sequelize | null = null
 
 /** Initialises every model on one Sequelize instance and wires the associations (once). */
 export function initModels(sequelize: Sequelize): void {
   if (initialisedFor === sequelize) return
-  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity]) {
+  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, CustomTarget, WorkspaceProfile, ReportRevision]) {
     model.initModel(sequelize)
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' })
@@ -40,6 +43,9 @@ export function initModels(sequelize: Sequelize): void {
   Capture.hasMany(Analysis, { foreignKey: 'captureId', as: 'analyses' })
   Analysis.belongsTo(Capture, { foreignKey: 'captureId', as: 'capture' })
   Activity.belongsTo(User, { foreignKey: 'userId', as: 'user' })
+  Workspace.hasMany(CustomTarget, { foreignKey: 'workspaceId', as: 'customTargets' })
+  ShareLink.belongsTo(ReportRevision, { foreignKey: 'reportRevisionId', as: 'reportRevision' })
+  Room.hasMany(ReportRevision, { foreignKey: 'roomId', as: 'reportRevisions' })
   Workspace.hasMany(Invitation, { foreignKey: 'workspaceId', as: 'invitations' })
   initialisedFor = sequelize
 }

@@ -7,7 +7,7 @@ import type { Role } from '../../shared/api/common'
  * client — only rooms shared with them; may add captures there; deletes nothing of others';
  * viewer — read-only on rooms shared with them.
  */
-export type WorkspaceAction = 'room:create' | 'room:list-all' | 'members:read' | 'members:manage'
+export type WorkspaceAction = 'room:create' | 'room:list-all' | 'members:read' | 'members:manage' | 'targets:manage' | 'profile:read' | 'profile:manage'
 export type RoomAction =
   | 'room:read'
   | 'room:update'
@@ -18,12 +18,17 @@ export type RoomAction =
   | 'survey:delete'
   | 'capture:create'
   | 'capture:delete-any'
+  /** Start analyses, re-pin the analysis that counts, include or exclude a capture from the average. */
+  | 'capture:judge'
 
 const WORKSPACE_RULES: Record<WorkspaceAction, readonly Role[]> = {
   'room:create': ['owner', 'engineer'],
   'room:list-all': ['owner', 'engineer'],
   'members:read': ['owner', 'engineer'],
   'members:manage': ['owner'],
+  'targets:manage': ['owner', 'engineer'],
+  'profile:read': ['owner', 'engineer'],
+  'profile:manage': ['owner'],
 }
 
 const ROOM_RULES: Record<RoomAction, readonly Role[]> = {
@@ -36,6 +41,7 @@ const ROOM_RULES: Record<RoomAction, readonly Role[]> = {
   'survey:delete': ['owner', 'engineer'],
   'capture:create': ['owner', 'engineer', 'client'],
   'capture:delete-any': ['owner', 'engineer'],
+  'capture:judge': ['owner', 'engineer'],
 }
 
 export function mayInWorkspace(role: Role, action: WorkspaceAction): boolean {

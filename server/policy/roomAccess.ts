@@ -40,5 +40,6 @@ export function roomPermissions(role: Role, isShared: boolean): RoomPermissions 
     canDelete: mayOnRoom(role, isShared, 'room:delete'),
     canShare: mayOnRoom(role, isShared, 'room:share'),
     canAddCaptures: mayOnRoom(role, isShared, 'capture:create'),
+    canJudgeCaptures: mayOnRoom(role, isShared, 'capture:judge'),
   }
 }

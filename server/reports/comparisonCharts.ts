@@ -8,7 +8,7 @@ export const surveyColour = (index: number, count: number) => (index === count -
 const OCTAVE_TICKS_HZ = [31.5, 63, 125, 250, 500, 1000, 2000, 4000, 8000, 16000]
 const hzLabel = (hz: number) => (hz >= 1000 ? `${hz / 1000}k` : String(hz))
 
-/** The surveys' averaged magnitude responses on a log-frequency axis, dB. */
+/** The surveys' averaged magnitude responses on a log-frequency axis, dB (legend by survey key S1, S2 …). */
 export function responseOverlaySvg(comparison: ComparisonDto): string {
   const count = comparison.surveys.length
   return renderChartSvg(
@@ -18,7 +18,7 @@ export function responseOverlaySvg(comparison: ComparisonDto): string {
       xAxis: { type: 'log', min: 20, max: 20000, name: 'Hz', nameLocation: 'middle', nameGap: 25, axisLabel: { customValues: OCTAVE_TICKS_HZ, formatter: hzLabel }, axisTick: { customValues: OCTAVE_TICKS_HZ } },
       yAxis: { type: 'value', name: 'dB', scale: true },
       series: comparison.surveys.map((entry, index) => ({
-        name: entry.summary.survey.name,
+        name: `S${index + 1}`,
         type: 'line',
         showSymbol: false,
         lineStyle: { width: 1.5, color: surveyColour(index, count) },
@@ -38,7 +38,7 @@ export function reverberationOverlaySvg(comparison: ComparisonDto): string {
   const target = comparison.target
   const lower = bands.map((hz) => target?.bands.find((b) => b.centreHz === hz)?.minS ?? null)
   const upper = bands.map((hz) => target?.bands.find((b) => b.centreHz === hz)?.maxS ?? null)
-  const legendNames = [...(target ? ['Target'] : []), ...comparison.surveys.map((entry) => entry.summary.survey.name)]
+  const legendNames = [...(target ? ['Target'] : []), ...comparison.surveys.map((_, index) => `S${index + 1}`)]
   return renderChartSvg(
     {
       legend: { top: 0, data: legendNames },
@@ -53,7 +53,7 @@ export function reverberationOverlaySvg(comparison: ComparisonDto): string {
             ]
           : []),
         ...comparison.surveys.map((entry, index) => ({
-          name: entry.summary.survey.name,
+          name: `S${index + 1}`,
           type: 'line',
           data: bands.map((hz) => entry.summary.readings.find((r) => r.centreHz === hz)?.reverberationTimeS ?? null),
           lineStyle: { width: 2, color: surveyColour(index, count) },

@@ -19,7 +19,7 @@ export function resultsRouter(context: { queue: AnalysisQueue }) {
   router.get('/surveys/:surveyId/export', requireAuth, validate({ params: surveyParams, query: bandResolutionQuerySchema.extend(formatQuery.shape) }), results.exportSurvey)
   router.get('/rooms/:roomId/comparison', requireAuth, validate({ params: roomParams, query: comparisonQuerySchema }), results.comparison)
   router.get('/rooms/:roomId/comparison/export', requireAuth, validate({ params: roomParams, query: comparisonQuerySchema.extend(formatQuery.shape) }), results.exportComparison)
-  router.get('/captures/:captureId/export', requireAuth, validate({ params: captureParams, query: formatQuery }), results.exportCapture)
+  router.get('/captures/:captureId/export', requireAuth, validate({ params: captureParams, query: formatQuery.extend({ analysisId: idParam.optional() }) }), results.exportCapture)
   router.get('/captures/:captureId/analyses', requireAuth, validate({ params: captureParams }), results.analyses)
   router.post('/captures/:captureId/analyses', requireAuth, validate({ params: captureParams, body: reanalyseBodySchema }), results.reanalyse(context.queue))
   router.get('/test-signal/sweep.wav', validate({ query: sweepQuerySchema }), results.sweepWav)

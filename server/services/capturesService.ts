@@ -1,4 +1,4 @@
-import { Analysis, Capture } from '../models'
+import { Analysis, Capture, Survey } from '../models'
 import { ForbiddenError, NotFoundError, ValidationError } from '../errors'
 import { requireSurveyAccess } from './surveysService'
 import { requireRoomAccess } from '../policy/roomAccess'
@@ -14,8 +14,9 @@ import { DspInputError } from '../../shared/acoustics/errors'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { AnalysisDto, CaptureDto, CaptureHeadline, CreateCaptureFields } from '../../shared/api/captures'
 import type { AnalysisResult } from '../../shared/types/analysis'
-import { latestAnalysesByCapture } from './analysisLookup'
 import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
+import { countingAnalyses, surveySettingsKeyFor, surveyAnalysisSettings } from './countingAnalyses'
+import { noteReportChange } from './reportDrafts'
 import { logger } from '../logger'
 import { recordActivity } from './activityService'
 
@@ -47,6 +48,10 @@ export function toCaptureDto(capture: Capture): CaptureDto {
     durationS: capture.durationS,
     status: capture.status,
     statusMessage: capture.statusMessage,
+    isExcluded: capture.excludedAt !== null,
+    exclusionReason: capture.exclusionReason,
+    excludedAt: capture.excludedAt?.toISOString() ?? null,
+    pinnedAnalysisId: capture.pinnedAnalysisId,
     createdAt: capture.createdAt.toISOString(),
     updatedAt: capture.updatedAt.toISOString(),
   }
@@ -106,7 +111,7 @@ export async function createCapture(
   context: { store: ObjectStore; queue: AnalysisQueue },
 ): Promise<CaptureDto> {
   try {
-    const { room } = await requireSurveyAccess(userId, surveyId, 'capture:create')
+    const { room, survey } = await requireSurveyAccess(userId, surveyId, 'capture:create')
     if (!files.file) throw new ValidationError('Choose a WAV file to upload.', { file: 'Choose a WAV file to upload.' })
     if (files.file.size === 0) throw new ValidationError('The file is empty.', { file: 'The file is empty.' })
     const hasSweepParameters = fields.sweepF1Hz !== null && fields.sweepF2Hz !== null && fields.sweepDurationS !== null
@@ -146,7 +151,8 @@ export async function createCapture(
         { transaction },
       ),
     )
-    await enqueueCapture(capture, context.queue)
+    await enqueueCapture(capture, context.queue, surveySettingsKeyFor(capture, surveyAnalysisSettings(survey)))
+    await noteReportChange(room.id, surveyId, `New capture ${capture.receiverLabel || capture.originalName} uploaded`)
     await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.uploaded', summary: `uploaded ${capture.originalName} (${capture.receiverLabel || 'no position label'})` })
     return toCaptureDto(capture)
   } catch (error) {
@@ -187,10 +193,10 @@ export function headlineOf(result: AnalysisResult | undefined): CaptureHeadline 
 }
 
 export async function listCaptures(userId: number, surveyId: number): Promise<CaptureDto[]> {
-  await requireSurveyAccess(userId, surveyId, 'room:read')
+  const { survey } = await requireSurveyAccess(userId, surveyId, 'room:read')
   const captures = await Capture.findAll({ where: { surveyId }, order: [['id', 'ASC']] })
-  const analyses = await latestAnalysesByCapture(captures.map((c) => c.id))
-  return captures.map((capture) => ({ ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }))
+  const analyses = await countingAnalyses(captures, survey)
+  return captures.map((capture) => ({ ...toCaptureDto(capture), countingAnalysisId: analyses.get(capture.id)?.id ?? null, headline: headlineOf(analyses.get(capture.id)?.result) }))
 }
 
 /** Loads a capture the caller may read; a capture in a room they cannot see is a 404. */
@@ -209,8 +215,8 @@ export async function requireCaptureAccess(userId: number, captureId: number) {
 
 export async function getCapture(userId: number, captureId: number): Promise<CaptureDto> {
   const { capture } = await requireCaptureAccess(userId, captureId)
-  const analyses = await latestAnalysesByCapture([capture.id])
-  return { ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }
+  const analysis = (await countingAnalyses([capture], await surveyOf(capture))).get(capture.id)
+  return { ...toCaptureDto(capture), countingAnalysisId: analysis?.id ?? null, headline: headlineOf(analysis?.result) }
 }
 
 /**
@@ -223,14 +229,25 @@ export async function deleteCapture(userId: number, captureId: number, store: Ob
   const mayDeleteOwn = mayOnRoom(role, isShared, 'capture:create') && capture.uploadedById === userId
   if (!mayDeleteAny && !mayDeleteOwn) throw new ForbiddenError('You may delete only captures you uploaded.')
   await capture.destroy()
+  await noteReportChange(room.id, capture.surveyId, `Capture ${capture.receiverLabel || capture.originalName} deleted`)
   await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.deleted', summary: `deleted ${capture.originalName}` })
   await releaseQueuedContent(store)
 }
 
-/** The newest analysis of a capture, or the one asked for by id. */
+async function surveyOf(capture: Capture): Promise<Survey> {
+  return (capture as Capture & { survey?: Survey }).survey ?? (await Survey.findByPk(capture.surveyId))!
+}
+
+/**
+ * The analysis a capture page opens on and its exports use: the one asked for by id, else the one
+ * that counts (pinned, or the default rule), else — before any analysis with the survey's
+ * settings exists — the newest, marked as not counting.
+ */
 export async function getLatestAnalysis(userId: number, captureId: number, analysisId?: number): Promise<AnalysisDto> {
-  await requireCaptureAccess(userId, captureId)
-  const analysis = await Analysis.findOne({ where: { captureId, ...(analysisId ? { id: analysisId } : {}) }, order: [['updatedAt', 'DESC']] })
+  const { capture } = await requireCaptureAccess(userId, captureId)
+  const counting = (await countingAnalyses([capture], await surveyOf(capture), undefined, { withResult: false })).get(capture.id)
+  const wantedId = analysisId ?? counting?.id
+  const analysis = await Analysis.findOne({ where: { captureId, ...(wantedId ? { id: wantedId } : {}) }, order: [['updatedAt', 'DESC']] })
   if (!analysis) throw new NotFoundError('An analysis of that capture', 'analysis-not-ready')
   return {
     id: analysis.id,
@@ -238,6 +255,8 @@ export async function getLatestAnalysis(userId: number, captureId: number, analy
     settingsKey: analysis.settingsKey,
     engineVersion: analysis.engineVersion,
     createdAt: analysis.createdAt.toISOString(),
+    isCounting: analysis.id === counting?.id,
+    isPinned: analysis.id === capture.pinnedAnalysisId,
     result: analysis.result,
   }
 }

@@ -12,31 +12,40 @@ export function analysisToCsv(result: AnalysisResult): string {
   return toCsv([header, ...rows])
 }
 
-/** Spatial average of a survey: mean, standard deviation and count of each parameter per band. */
+/**
+ * Spatial average of a survey over the included captures only: mean, standard deviation and count
+ * of each parameter per band, the judged T with its ISO 3382-2 σ, and the capture ids used.
+ */
 export function surveySummaryToCsv(summary: SurveySummaryDto): string {
-  const header = ['band_hz', ...AVERAGED_PARAMETERS.flatMap((p) => [`${p}_mean`, `${p}_sd`, `${p}_n`]), 'judged_T_s', 'judged_parameter', 'reliable']
+  const header = ['band_hz', ...AVERAGED_PARAMETERS.flatMap((p) => [`${p}_mean`, `${p}_sd`, `${p}_n`]), 'judged_T_s', 'judged_sigma_s', 'judged_parameter', 'reliable', 'captures_used']
+  const used = summary.positions.filter((p) => p.isIncluded && p.analysisId !== null).map((p) => p.captureId).join(' ')
   const rows = summary.bands.map((band, i) => {
     const reading = summary.readings[i]!
     return [
       band.centreHz,
       ...AVERAGED_PARAMETERS.flatMap((p) => [band.parameters[p].mean, band.parameters[p].standardDeviation, band.parameters[p].count]),
       reading.reverberationTimeS,
+      reading.uncertaintyS,
       reading.parameter,
       reading.isReliable ? 'yes' : 'no',
+      used,
     ]
   })
   return toCsv([header, ...rows])
 }
 
-/** Comparison: the judged T per survey, the change first → last, the target limits and verdicts. */
+/** Comparison (included captures only): the judged T and σ per survey, the change first → last, the target limits and verdicts. */
 export function comparisonToCsv(comparison: ComparisonDto): string {
   const names = comparison.surveys.map((s) => s.summary.survey.name)
-  const header = ['band_hz', ...names.map((n) => `${n} T_s`), 'change_s', 'change_percent', 'target_min_s', 'target_max_s', ...names.map((n) => `${n} verdict`)]
+  const header = ['band_hz', ...names.flatMap((n) => [`${n} T_s`, `${n} sigma_s`]), 'change_s', 'change_percent', 'target_min_s', 'target_max_s', ...names.map((n) => `${n} verdict`)]
   const rows = comparison.differences.map((difference) => {
     const target = comparison.target?.bands.find((b) => b.centreHz === difference.centreHz)
     return [
       difference.centreHz,
-      ...comparison.surveys.map((s) => s.summary.readings.find((r) => r.centreHz === difference.centreHz)?.reverberationTimeS ?? null),
+      ...comparison.surveys.flatMap((s) => {
+        const reading = s.summary.readings.find((r) => r.centreHz === difference.centreHz)
+        return [reading?.reverberationTimeS ?? null, reading?.uncertaintyS ?? null]
+      }),
       difference.changeS,
       difference.changePercent,
       target?.minS ?? null,

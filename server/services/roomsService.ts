@@ -9,6 +9,8 @@ import { releaseQueuedContent } from '../storage/releaseContent'
 import type { ObjectStore } from '../storage/createObjectStore'
 import type { CreateRoomBody, RoomDto, UpdateRoomBody } from '../../shared/api/rooms'
 import type { Role } from '../../shared/api/common'
+import { describeRoomTarget, isChoosableTargetProfile } from './roomTargetService'
+import { noteReportChange } from './reportDrafts'
 
 async function surveyFacts(roomIds: number[]): Promise<Map<number, { count: number; last: string | null }>> {
   const rows = (await Survey.findAll({
@@ -20,7 +22,7 @@ async function surveyFacts(roomIds: number[]): Promise<Map<number, { count: numb
   return new Map(rows.map((row) => [row.roomId, { count: Number(row.count), last: row.last }]))
 }
 
-function toRoomDto(room: Room, role: Role, isShared: boolean, facts?: { count: number; last: string | null }): RoomDto {
+async function toRoomDto(room: Room, role: Role, isShared: boolean, facts?: { count: number; last: string | null }): Promise<RoomDto> {
   return {
     id: room.id,
     workspaceId: room.workspaceId,
@@ -34,6 +36,7 @@ function toRoomDto(room: Room, role: Role, isShared: boolean, facts?: { count: n
     volumeM3: room.volumeM3,
     effectiveVolumeM3: room.effectiveVolumeM3(),
     targetProfile: room.targetProfile,
+    target: await describeRoomTarget(room),
     notes: room.notes,
     surveyCount: facts?.count ?? 0,
     lastSurveyOn: facts?.last ?? null,
@@ -58,11 +61,12 @@ export async function listRooms(userId: number, workspaceId: number, search?: st
   }
   const rooms = await Room.findAll({ where: { [Op.and]: conditions }, order: [['updatedAt', 'DESC']] })
   const facts = await surveyFacts(rooms.map((r) => r.id))
-  return rooms.map((room) => toRoomDto(room, role, sharedIds.has(room.id), facts.get(room.id)))
+  return Promise.all(rooms.map((room) => toRoomDto(room, role, sharedIds.has(room.id), facts.get(room.id))))
 }
 
 export async function createRoom(userId: number, workspaceId: number, body: CreateRoomBody): Promise<RoomDto> {
   const role = await requireWorkspaceRole(userId, workspaceId, 'room:create')
+  await assertChoosableTarget(workspaceId, body.targetProfile)
   const room = await Room.create({ ...body, workspaceId })
   await recordActivity({ workspaceId, roomId: room.id, userId, action: 'room.created', summary: `created the room "${room.name}"` })
   return toRoomDto(room, role, false)
@@ -75,13 +79,27 @@ export async function getRoom(userId: number, roomId: number): Promise<RoomDto> 
 
 export async function updateRoom(userId: number, roomId: number, body: UpdateRoomBody): Promise<RoomDto> {
   const { room, role, isShared } = await requireRoomAccess(userId, roomId, 'room:update')
+  const previousTarget = body.targetProfile !== undefined && body.targetProfile !== room.targetProfile ? await describeRoomTarget(room) : null
+  if (previousTarget) await assertChoosableTarget(room.workspaceId, body.targetProfile!)
   room.set(body)
   const dimensionsComplete = room.lengthM !== null && room.widthM !== null && room.heightM !== null
   if (!dimensionsComplete && room.volumeM3 === null) {
     throw new ValidationError('Give length, width and height, or a volume.', { lengthM: 'Give length, width and height, or a volume.' })
   }
   await room.save()
+  if (previousTarget) {
+    const next = await describeRoomTarget(room)
+    const summary = `changed the target from “${previousTarget.name}” to “${next.name}”`
+    await recordActivity({ workspaceId: room.workspaceId, roomId, userId, action: 'room.target-changed', summary })
+    await noteReportChange(roomId, null, `Target changed to “${next.name}”`)
+  }
   return toRoomDto(room, role, isShared, (await surveyFacts([room.id])).get(room.id))
+}
+
+async function assertChoosableTarget(workspaceId: number, profile: string): Promise<void> {
+  if (await isChoosableTargetProfile(workspaceId, profile)) return
+  const message = 'Choose one of the listed targets: a published one, or a custom target of this workspace.'
+  throw new ValidationError(message, { targetProfile: message })
 }
 
 /** Deletes the room with its surveys and captures, and the stored files no other row uses. */

@@ -7,6 +7,7 @@ import type { CreateSurveyBody, SurveyDto, UpdateSurveyBody } from '../../shared
 import { recordActivity } from './activityService'
 import { releaseQueuedContent } from '../storage/releaseContent'
 import type { ObjectStore } from '../storage/createObjectStore'
+import { surveyAnalysisSettings } from './countingAnalyses'
 
 function toSurveyDto(survey: Survey, captureCount: number): SurveyDto {
   return {
@@ -17,6 +18,8 @@ function toSurveyDto(survey: Survey, captureCount: number): SurveyDto {
     temperatureC: survey.temperatureC,
     humidityPercent: survey.humidityPercent,
     treatmentDescription: survey.treatmentDescription,
+    analysisSettings: surveyAnalysisSettings(survey),
+    equipment: { microphone: '', loudspeaker: '', audioInterface: '', ...(survey.equipment ?? {}) },
     captureCount,
     createdAt: survey.createdAt.toISOString(),
     updatedAt: survey.updatedAt.toISOString(),

@@ -63,11 +63,33 @@ export interface CaptureDto {
   durationS: number
   status: CaptureStatus
   statusMessage: string | null
+  /** An excluded capture stays visible but counts in no average, verdict or export. */
+  isExcluded: boolean
+  exclusionReason: string | null
+  excludedAt: string | null
+  /** The analysis an owner or engineer pinned for reporting; null = the default rule. */
+  pinnedAnalysisId: number | null
+  /** The analysis that counts for this capture at the survey's settings (pinned or default); null if none yet. */
+  countingAnalysisId?: number | null
   /** Present on list and detail reads; null before the first analysis. */
   headline?: CaptureHeadline | null
   createdAt: string
   updatedAt: string
 }
+
+export const captureInclusionBodySchema = z
+  .object({
+    isIncluded: z.boolean({ error: 'Say whether the capture counts in the average.' }),
+    reason: z.string().trim().max(300, 'Keep the reason under 300 characters.').default(''),
+  })
+  .refine((body) => body.isIncluded || body.reason.length >= 3, { message: 'Give a reason for leaving this position out (at least 3 characters).', path: ['reason'] })
+export type CaptureInclusionBody = z.infer<typeof captureInclusionBodySchema>
+
+export const pinAnalysisBodySchema = z.object({
+  /** null = back to the default rule (the first successful analysis with the survey's settings). */
+  analysisId: z.number().int().positive().nullable(),
+})
+export type PinAnalysisBody = z.infer<typeof pinAnalysisBodySchema>
 
 export interface AnalysisDto {
   id: number
@@ -75,5 +97,9 @@ export interface AnalysisDto {
   settingsKey: string
   engineVersion: string
   createdAt: string
+  /** True when this is the analysis that counts for the capture (pinned, or the default rule). */
+  isCounting: boolean
+  /** True when an owner or engineer pinned it explicitly. */
+  isPinned: boolean
   result: AnalysisResult
 }

@@ -58,6 +58,9 @@ export interface ShareLinkDto {
   label: string
   surveyIds: number[]
   bands: 'octave' | 'third'
+  /** The frozen report revision the link shows (null: a link made before revisions existed). */
+  reportRevisionId: number | null
+  revisionNumber: number | null
   expiresAt: string | null
   revokedAt: string | null
   createdAt: string

@@ -3,7 +3,7 @@ import type { SpatialAverageBand } from '../acoustics/spatialAverage'
 import type { BandVerdict } from '../room/targets/bandVerdict'
 import type { TargetMask } from '../room/targets/targetMask'
 import type { AnalysisSettings, BandResolution, DecayCurve } from '../types/analysis'
-import type { SurveyDto } from './surveys'
+import type { SurveyAnalysisSettings, SurveyDto } from './surveys'
 
 export const bandResolutionQuerySchema = z.object({
   bands: z.enum(['octave', 'third']).default('octave'),
@@ -16,16 +16,50 @@ export interface SurveyBandReading {
   reverberationTimeS: number | null
   parameter: 'T30' | 'T20' | null
   isReliable: boolean
-  /** Why a band is not reliable, in plain words; null when it is. */
+  /** False when no included position has an analysis in this band at this resolution. */
+  isAnalysed: boolean
+  /** Positions whose value of the judged parameter went into the mean. */
+  positionCount: number
+  /** ISO 3382-2 Annex A standard uncertainty σ of the judged mean, s (N = positionCount). */
+  uncertaintyS: number | null
+  /** Why a band is not reliable or not analysed, in plain words; null when it is judged. */
   reliabilityNote: string | null
+}
+
+/** One capture of a survey as the average used it (or left it out). */
+export interface SurveyPositionDto {
+  captureId: number
+  receiverLabel: string
+  sourceLabel: string
+  originalName: string
+  kind: 'impulse' | 'sweep'
+  isIncluded: boolean
+  exclusionReason: string | null
+  /** analysed: has the analysis that counts at this resolution; pending: still queued or analysing. */
+  state: 'analysed' | 'not-analysed' | 'pending' | 'failed'
+  analysisId: number | null
+  analysisSettings: AnalysisSettings | null
+  engineVersion: string | null
+  /** Per-band values of that analysis (empty when not analysed). */
+  bands: { centreHz: number; T20: number | null; T30: number | null; EDT: number | null; uncertaintyT30: number | null; isFlagged: boolean }[]
 }
 
 export interface SurveySummaryDto {
   survey: SurveyDto
   bandResolution: BandResolution
+  /** The survey's analysis settings (the band resolution of the summary may differ). */
+  analysisSettings: SurveyAnalysisSettings
   captureCount: number
-  /** Captures with an analysis at this band resolution. */
+  /** Captures that count in the average (not excluded). */
+  includedCount: number
+  excludedCount: number
+  /** Included captures with an analysis that counts at this band resolution. */
   analysedCount: number
+  /** Included captures still queued or being analysed, and those whose analysis failed. */
+  pendingCount: number
+  failedCount: number
+  /** Every capture, included or not, with the analysis used and its per-band values. */
+  positions: SurveyPositionDto[]
   /** Spatial average over positions (mean, spread, count per parameter). */
   bands: SpatialAverageBand[]
   readings: SurveyBandReading[]
@@ -55,6 +89,8 @@ export interface ComparisonDifference {
 export interface ComparisonDto {
   roomId: number
   roomName: string
+  roomClientName: string
+  roomAddress: string
   volumeM3: number | null
   bandResolution: BandResolution
   target: TargetMask | null
@@ -64,6 +100,12 @@ export interface ComparisonDto {
   differences: ComparisonDifference[]
   /** One line on what the treatment achieved; null without a target or volume. */
   summaryLine: string | null
+  /** The one general caution shown with every verdict. */
+  targetCaution: string
+  /** Why this comparison cannot be sent as a report yet (empty when it can). */
+  reportBlockers: string[]
+  /** Set when this is a frozen report revision (a share link). */
+  revision?: { number: number; frozenAt: string; preparedBy: string | null; consultancyName: string }
 }
 
 export const reanalyseBodySchema = z.object({
@@ -74,8 +116,28 @@ export const reanalyseBodySchema = z.object({
   timeReversedFiltering: z.boolean(),
 }) satisfies z.ZodType<AnalysisSettings>
 
+/** The outcome of "analyse the whole survey with these settings". */
+export interface SurveyAnalysisRunDto {
+  settings: SurveyAnalysisSettings
+  queued: number
+  alreadyAnalysed: number
+  total: number
+}
+
+/** How far the captures of a survey are analysed with its settings. */
+export interface SurveyAnalysisProgressDto {
+  settings: SurveyAnalysisSettings
+  total: number
+  done: number
+  pending: number
+  failed: number
+}
+
 export interface AnalysisListItemDto {
   id: number
+  /** True for the analysis that counts for the capture (pinned or default rule). */
+  isCounting: boolean
+  isPinned: boolean
   settings: AnalysisSettings
   engineVersion: string
   createdAt: string

@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import type { Role } from './common'
+import type { RoomTargetDto } from './targets'
 
 export const ROOM_USES = [
   'control-room',
@@ -88,6 +89,8 @@ export interface RoomDto {
   /** The volume used for calculations: given volume, else L×W×H. */
   effectiveVolumeM3: number | null
   targetProfile: string
+  /** The target in force, as the room page and every verdict name it. */
+  target: RoomTargetDto
   notes: string
   surveyCount: number
   lastSurveyOn: string | null
@@ -103,6 +106,8 @@ export interface RoomPermissions {
   canDelete: boolean
   canShare: boolean
   canAddCaptures: boolean
+  /** Start analyses, pin the analysis that counts, include or exclude captures (owners, engineers). */
+  canJudgeCaptures: boolean
 }
 
 export const shareRoomBodySchema = z.object({

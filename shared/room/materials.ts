@@ -15,7 +15,8 @@ export interface AbsorptionMaterial {
   caution?: string
 }
 
-const ENC = 'Engineering Noise Control, 5th ed. (2017), Table 6.2 (as transcribed in the project facts §8)'
+// Both tables as transcribed in the project's acoustics facts §8.
+const ENC = 'Engineering Noise Control, 5th ed. (2017), Table 6.2'
 const FIRE = 'Check the fire rating of fibrous and fabric products; follow local building and fire codes.'
 
 /** Builds a row from the six published octaves 125–4000 Hz; 63 and 8000 Hz stay null (not extrapolated). */
@@ -43,7 +44,7 @@ export const MATERIALS: readonly AbsorptionMaterial[] = [
   row('audience-upholstered', 'Audience, 100 % occupied, upholstered seats', [0.52, 0.68, 0.85, 0.97, 0.93, 0.85]),
   row('person-seated', 'Seated person (absorption area per person, m²)', [0.23, 0.37, 0.44, 0.45, 0.45, 0.45], { kind: 'object' }),
   row('glass-fibre-mat-80kg-50mm', 'Glass-fibre mat, 80 kg/m³, 50 mm', [0.2, 0.45, 0.7, 0.8, 0.8, 0.8], {
-    source: '"Audio Engineering" handbook, Table 29.3 (as transcribed in the project facts §8)',
+    source: '"Audio Engineering" handbook, Table 29.3',
     caution: FIRE,
   }),
 ]

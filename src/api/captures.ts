@@ -1,4 +1,4 @@
-import type { AnalysisDto, AnalysisListItemDto, CaptureDto } from '@shared/api'
+import type { AnalysisDto, AnalysisListItemDto, CaptureDto, CaptureInclusionBody } from '@shared/api'
 import type { AnalysisSettings } from '@shared/types/analysis'
 import { apiUrl, request, toQuery } from './http'
 import { uploadForm, type UploadOptions } from './upload'
@@ -39,6 +39,17 @@ export function requestAnalysis(captureId: number, settings: AnalysisSettings): 
   return request<unknown>('POST', `/captures/${captureId}/analyses`, settings)
 }
 
-export function captureExportUrl(captureId: number, format: ExportFormat): string {
-  return apiUrl(`/captures/${captureId}/export${toQuery({ format })}`)
+/** The export of the analysis shown (by id), or of the one that counts when none is given. */
+export function captureExportUrl(captureId: number, format: ExportFormat, analysisId?: number): string {
+  return apiUrl(`/captures/${captureId}/export${toQuery({ format, analysisId: analysisId?.toString() })}`)
+}
+
+/** Includes the capture in its survey's average, or leaves it out with a reason (owners, engineers). */
+export function setCaptureInclusion(captureId: number, body: CaptureInclusionBody): Promise<CaptureListItem> {
+  return request<CaptureListItem>('PUT', `/captures/${captureId}/inclusion`, body)
+}
+
+/** Pins the analysis used for reporting; null goes back to the default rule. */
+export function pinAnalysis(captureId: number, analysisId: number | null): Promise<CaptureListItem> {
+  return request<CaptureListItem>('PUT', `/captures/${captureId}/pinned-analysis`, { analysisId })
 }

@@ -1,11 +1,11 @@
-import type { CreateSurveyBody, SurveyDto, UpdateSurveyBody } from '@shared/api'
+import type { CreateSurveyInput, SurveyDto, UpdateSurveyBody } from '@shared/api'
 import { request } from './http'
 
 export function listSurveys(roomId: number): Promise<SurveyDto[]> {
   return request<SurveyDto[]>('GET', `/rooms/${roomId}/surveys`)
 }
 
-export function createSurvey(roomId: number, body: CreateSurveyBody): Promise<SurveyDto> {
+export function createSurvey(roomId: number, body: CreateSurveyInput): Promise<SurveyDto> {
   return request<SurveyDto>('POST', `/rooms/${roomId}/surveys`, body)
 }
 

@@ -1,4 +1,4 @@
-import { mdiArrowDownBoldCircleOutline, mdiArrowUpBoldCircleOutline, mdiCheckCircleOutline, mdiHelpCircleOutline, mdiMinusCircleOutline } from '@mdi/js'
+import { mdiClockOutline, mdiArrowDownBoldCircleOutline, mdiArrowUpBoldCircleOutline, mdiCheckCircleOutline, mdiHelpCircleOutline, mdiMinusCircleOutline } from '@mdi/js'
 import type { BandVerdict, TargetBand } from '@shared/room'
 import { formatFrequencyWithUnit } from './charts/frequencyTicks'
 import { formatMeasure } from '@/utils/formatMeasure'
@@ -16,6 +16,7 @@ const PRESENTATION: Record<BandVerdict, VerdictPresentation> = {
   'too-live': { label: 'Too live', icon: mdiArrowUpBoldCircleOutline, color: 'warning' },
   'too-dead': { label: 'Too dead', icon: mdiArrowDownBoldCircleOutline, color: 'info' },
   'not-reliable': { label: 'Not reliable', icon: mdiHelpCircleOutline, color: 'secondary' },
+  'not-analysed': { label: 'Not analysed', icon: mdiClockOutline, color: 'on-surface-variant' },
   'no-target': { label: 'No target', icon: mdiMinusCircleOutline, color: 'on-surface-variant' },
 }
 
@@ -33,7 +34,7 @@ export function formatTargetRange(target: Pick<TargetBand, 'minS' | 'maxS'> | un
 
 /** Tooltip line: "125 Hz: measured 0.52 s, target 0.20–0.30 s — too live." */
 export function describeVerdict(centreHz: number, measuredS: number | null, target: TargetBand | undefined, verdict: BandVerdict): string {
-  const measured = measuredS === null ? 'not measured' : `measured ${formatMeasure(measuredS, 2, 's')}`
+  const measured = verdict === 'not-analysed' ? 'not analysed in these bands yet' : measuredS === null ? 'not measured' : `measured ${formatMeasure(measuredS, 2, 's')}`
   const flagged = verdict === 'not-reliable' && measuredS !== null ? ' (flagged by the analysis, so not judged)' : ''
   const range = formatTargetRange(target)
   const targetText = range === 'no limit' ? 'no target limit' : `target ${range}`

@@ -104,6 +104,22 @@ export function useCaptureAnalysis(captureId: Ref<number>) {
     await show(analysisId).catch((caught: unknown) => (requestError.value = caught))
   }
 
+  /** Pins the analysis used for reporting (owners, engineers); null goes back to the default rule. */
+  const isPinning = ref(false)
+  async function pin(analysisId: number | null): Promise<void> {
+    requestError.value = null
+    isPinning.value = true
+    try {
+      capture.value = await capturesApi.pinAnalysis(captureId.value, analysisId)
+      analyses.value = await capturesApi.listAnalyses(captureId.value)
+      await show(analysisId ?? undefined)
+    } catch (caught) {
+      requestError.value = caught
+    } finally {
+      isPinning.value = false
+    }
+  }
+
   watch(captureId, () => {
     capture.value = null
     analysis.value = null
@@ -113,5 +129,5 @@ export function useCaptureAnalysis(captureId: Ref<number>) {
   }, { immediate: true })
 
   const isWaiting = computed(() => waitingFor.value !== null || (analysis.value === null && capture.value !== null && capture.value.status !== 'failed'))
-  return { capture, analyses, analysis, error, requestError, isLoading, waitingFor, isWaiting, load, applySettings, select }
+  return { capture, analyses, analysis, error, requestError, isLoading, waitingFor, isWaiting, isPinning, load, applySettings, select, pin }
 }

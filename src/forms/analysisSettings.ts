@@ -13,13 +13,4 @@ export function isSameAnalysisSettings(a: AnalysisSettings, b: AnalysisSettings)
   )
 }
 
-/** "octave bands · 1/6-octave smoothing · channel 0 · no gate · time-reversed filtering" (channels from 0, as in the API): settings for captions. */
-export function describeAnalysisSettings(settings: AnalysisSettings): string {
-  return [
-    settings.bands === 'octave' ? 'octave bands' : 'third-octave bands',
-    `1/${settings.smoothing}-octave smoothing`,
-    `channel ${settings.channel}`,
-    settings.gateMs === null ? 'no gate' : `${settings.gateMs} ms gate`,
-    settings.timeReversedFiltering ? 'time-reversed filtering' : 'forward filtering',
-  ].join(' · ')
-}
+export { describeAnalysisSettings } from '@shared/jobs/describeAnalysisSettings'

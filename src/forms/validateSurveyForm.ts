@@ -9,11 +9,14 @@ export interface SurveyFormValues {
   temperatureC: string
   humidityPercent: string
   treatmentDescription: string
+  microphone: string
+  loudspeaker: string
+  audioInterface: string
 }
 export type SurveyFormErrors = Partial<Record<keyof SurveyFormValues, string>>
 
 export function emptySurveyFormValues(now?: Date): SurveyFormValues {
-  return { name: '', measuredOn: todayIsoDate(now), temperatureC: '', humidityPercent: '', treatmentDescription: '' }
+  return { name: '', measuredOn: todayIsoDate(now), temperatureC: '', humidityPercent: '', treatmentDescription: '', microphone: '', loudspeaker: '', audioInterface: '' }
 }
 
 export function surveyToFormValues(survey: SurveyDto): SurveyFormValues {
@@ -23,6 +26,9 @@ export function surveyToFormValues(survey: SurveyDto): SurveyFormValues {
     temperatureC: survey.temperatureC === null ? '' : String(survey.temperatureC),
     humidityPercent: survey.humidityPercent === null ? '' : String(survey.humidityPercent),
     treatmentDescription: survey.treatmentDescription,
+    microphone: survey.equipment.microphone,
+    loudspeaker: survey.equipment.loudspeaker,
+    audioInterface: survey.equipment.audioInterface,
   }
 }
 
@@ -44,10 +50,11 @@ export function validateSurveyForm(values: SurveyFormValues): { body: CreateSurv
     temperatureC: Number.isNaN(numbers.temperatureC) ? null : numbers.temperatureC,
     humidityPercent: Number.isNaN(numbers.humidityPercent) ? null : numbers.humidityPercent,
     treatmentDescription: values.treatmentDescription.trim(),
+    equipment: { microphone: values.microphone, loudspeaker: values.loudspeaker, audioInterface: values.audioInterface },
   })
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
-      const field = issue.path[0] as keyof SurveyFormValues | undefined
+      const field = (issue.path[0] === 'equipment' ? issue.path[1] : issue.path[0]) as keyof SurveyFormValues | undefined
       if (!field || errors[field]) continue
       // The schema's own words for an over-long text are generic; say it plainly.
       const isLongText = issue.code === 'too_big' && issue.origin === 'string'

@@ -39,6 +39,7 @@ export const router = createRouter({
     { path: '/reset-password/:token', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), props: tokenProp, meta: { access: 'guest', title: 'Choose a new password' } },
     { path: '/shared/:token', name: 'shared', component: () => import('@/views/SharedComparisonView.vue'), props: tokenProp, meta: { access: 'any', title: 'Shared report' } },
     { path: '/dev/mailbox', name: 'dev-mailbox', component: () => import('@/views/DevMailboxView.vue'), meta: { access: 'any', title: 'Mailbox (this machine)' } },
+    { path: '/workspace/profile', name: 'workspace-profile', component: () => import('@/views/WorkspaceProfileView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Report profile' } },
     { path: '/workspace/members', name: 'members', component: () => import('@/views/MembersView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Members' } },
     { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { access: 'any', title: 'Page not found' } },
   ],

@@ -44,5 +44,5 @@ export const useRoomsStore = defineStore('rooms', () => {
     list.value = list.value.filter((room) => room.id !== roomId)
   }
 
-  return { list, listWorkspaceId, byId, fetchRooms, fetchRoom, createRoom, updateRoom, deleteRoom }
+  return { list, listWorkspaceId, byId, remember, fetchRooms, fetchRoom, createRoom, updateRoom, deleteRoom }
 })

@@ -1,6 +1,6 @@
 import { defineStore } from 'pinia'
 import { ref } from 'vue'
-import type { CreateSurveyBody, SurveyDto, UpdateSurveyBody } from '@shared/api'
+import type { CreateSurveyInput, SurveyDto, UpdateSurveyBody } from '@shared/api'
 import * as surveysApi from '@/api/surveys'
 
 /** Date order, then creation order for two surveys on the same day. */
@@ -21,7 +21,7 @@ export const useSurveysStore = defineStore('surveys', () => {
     return byRoomId.value[roomId] ?? []
   }
 
-  async function createSurvey(roomId: number, body: CreateSurveyBody): Promise<SurveyDto> {
+  async function createSurvey(roomId: number, body: CreateSurveyInput): Promise<SurveyDto> {
     const survey = await surveysApi.createSurvey(roomId, body)
     put(roomId, [...(byRoomId.value[roomId] ?? []), survey])
     return survey

@@ -11,7 +11,7 @@ export function comparisonRole(index: number, count: number): SeriesRole {
 
 /** A survey's judged reverberation time per band, as the verdict strip and target chart read it. */
 export function measuredBands(summary: SurveySummaryDto): MeasuredBand[] {
-  return summary.readings.map((r) => ({ centreHz: r.centreHz, reverberationTimeS: r.reverberationTimeS, isReliable: r.isReliable }))
+  return summary.readings.map((r) => ({ centreHz: r.centreHz, reverberationTimeS: r.reverberationTimeS, isReliable: r.isReliable, isAnalysed: r.isAnalysed }))
 }
 
 /** The averaged responses of the compared surveys that have one, as sent (1/6-octave smoothing). */

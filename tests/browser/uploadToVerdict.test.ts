@@ -61,7 +61,7 @@ describe('from upload to verdict in Chromium', () => {
     const strip = page.getByTestId('verdict-strip')
     await strip.waitFor({ timeout: 60_000 })
     await expect.poll(() => strip.textContent(), { timeout: 60_000 }).toMatch(/inside target/i)
-    await expect.poll(() => page.getByTestId('compare-summary').textContent()).toMatch(/After panels and bass traps: \d of \d octave bands inside the target/)
+    await expect.poll(() => page.getByTestId('compare-summary').textContent()).toMatch(/After panels and bass traps: \d of \d judged octave bands inside the target/)
     const pageText = (await page.locator('main').textContent()) ?? ''
     expect(pageText).toContain('Bare room')
     expect(pageText).toContain('After panels and bass traps')

@@ -18,7 +18,9 @@ globalThis.ResizeObserver ??= class {
 const MASK: TargetMask = {
   id: 'test',
   name: 'Test mask',
-  source: 'invented for the test',
+  kind: 'custom',
+  citation: null,
+  sourceNote: 'invented for the test',
   notes: [],
   bands: [
     { centreHz: 250, minS: 0.2, maxS: 0.3, nominalS: null },

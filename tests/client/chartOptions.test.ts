@@ -105,7 +105,9 @@ describe('reverberationTargetOption', () => {
   const mask: TargetMask = {
     id: 'test',
     name: 'Test mask',
-    source: 'invented',
+    kind: 'custom',
+    citation: null,
+    sourceNote: 'invented',
     notes: [],
     bands: [
       { centreHz: 125, minS: 0.2, maxS: 0.5, nominalS: null },

@@ -7,8 +7,9 @@ import { validateRoomForm } from '@/forms/validateRoomForm'
 const room: RoomDto = {
   id: 3, workspaceId: 1, name: 'Booth', clientName: '', address: '', use: 'other',
   lengthM: 5, widthM: 4, heightM: 2.5, volumeM3: null, effectiveVolumeM3: 50, targetProfile: 'auto', notes: '',
+  target: { targetProfile: 'auto', id: 'small-studio-common-practice', name: 'Small studio (common practice)', kind: 'common-practice', citation: null, sourceNote: null, citationText: 'Common practice of the trade (no published standard)', caution: 'Check the current edition.', octaveBands: null },
   surveyCount: 0, lastSurveyOn: null, createdAt: '2026-01-01T00:00:00Z', updatedAt: '2026-01-01T00:00:00Z',
-  permissions: { role: 'owner', canEdit: true, canDelete: true, canShare: true, canAddCaptures: true },
+  permissions: { role: 'owner', canEdit: true, canDelete: true, canShare: true, canAddCaptures: true, canJudgeCaptures: true },
 }
 
 describe('roomToFormValues', () => {

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { emptySurveyFormValues, validateSurveyForm, type SurveyFormValues } from '@/forms/validateSurveyForm'
 
 function values(overrides: Partial<SurveyFormValues>): SurveyFormValues {
-  return { name: 'Bare room', measuredOn: '2026-03-14', temperatureC: '', humidityPercent: '', treatmentDescription: '', ...overrides }
+  return { name: 'Bare room', measuredOn: '2026-03-14', temperatureC: '', humidityPercent: '', treatmentDescription: '', microphone: '', loudspeaker: '', audioInterface: '', ...overrides }
 }
 
 describe('validateSurveyForm', () => {
@@ -11,7 +11,7 @@ describe('validateSurveyForm', () => {
     const { body, errors } = validateSurveyForm(values({}))
 
     expect(errors).toEqual({})
-    expect(body).toEqual({ name: 'Bare room', measuredOn: '2026-03-14', temperatureC: null, humidityPercent: null, treatmentDescription: '' })
+    expect(body).toEqual({ name: 'Bare room', measuredOn: '2026-03-14', temperatureC: null, humidityPercent: null, treatmentDescription: '', equipment: { microphone: '', loudspeaker: '', audioInterface: '' } })
   })
 
   it('returns numbers for temperature and humidity, accepting a decimal comma', () => {

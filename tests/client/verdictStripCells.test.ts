@@ -6,7 +6,9 @@ import { verdictStripCells } from '@/components/verdictStripCells'
 const MASK: TargetMask = {
   id: 'test',
   name: 'Test mask',
-  source: 'invented for the test',
+  kind: 'custom',
+  citation: null,
+  sourceNote: 'invented for the test',
   notes: [],
   bands: [
     { centreHz: 125, minS: 0.2, maxS: 0.3, nominalS: 0.25 },
@@ -37,10 +39,10 @@ describe('verdictStripCells', () => {
     expect(cells[4]?.description).toBe('2 kHz: measured 0.25 s, no target limit — no target.')
   })
 
-  it('returns a not-reliable cell with a dash when a band was not measured', () => {
+  it('returns a not-analysed cell with a dash when no position was analysed in the band', () => {
     const [cell] = verdictStripCells([], { ...MASK, bands: MASK.bands.slice(0, 1) })
-    expect(cell?.verdict).toBe('not-reliable')
+    expect(cell?.verdict).toBe('not-analysed')
     expect(cell?.valueText).toBe('—')
-    expect(cell?.description).toBe('125 Hz: not measured, target 0.20–0.30 s — not reliable.')
+    expect(cell?.description).toBe('125 Hz: not analysed in these bands yet, target 0.20–0.30 s — not analysed.')
   })
 })

@@ -3,6 +3,7 @@ import type { Server } from 'node:http'
 import { existsSync } from 'node:fs'
 import path from 'node:path'
 import { createApp } from '../../server/app'
+import type { Mailer } from '../../server/mail/mailer'
 import { seedDemoData } from '../../server/db/demoData'
 import { startTestServices, type TestServices } from './testServices'
 import { Worker } from 'bullmq'
@@ -22,14 +23,14 @@ export interface RunningApp {
  * With `withWorker`, an analysis worker runs in-process and the demo captures are queued, as
  * `npm start` does.
  */
-export async function startRunningApp(options: { withWorker?: boolean } = {}): Promise<RunningApp> {
+export async function startRunningApp(options: { withWorker?: boolean; mailer?: Mailer } = {}): Promise<RunningApp> {
   const clientDir = path.resolve('dist')
   if (!existsSync(path.join(clientDir, 'index.html'))) {
     throw new Error('Browser tests need the built client: run `npm run build` first (npm run test:all does).')
   }
   const services = await startTestServices()
   await seedDemoData(services.sequelize, { store: services.store })
-  const ringdown = createApp({ ...services, clientDir })
+  const ringdown = createApp({ ...services, clientDir, ...(options.mailer ? { mailer: options.mailer } : {}) })
   const server: Server = await new Promise((resolve) => {
     const listening = ringdown.app.listen(0, '127.0.0.1', () => resolve(listening))
   })

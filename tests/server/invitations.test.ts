@@ -10,6 +10,7 @@ import { readFakeInbox, startFakeSmtpInbox } from '../../server/mail/fakeSmtpInb
 import { startTestServices, type TestServices } from '../helpers/testServices'
 import { ApiAgent, signedInAgent } from '../helpers/apiAgent'
 import { createWorkspaceFixture, FIXTURE_PASSWORD, type WorkspaceFixture } from '../helpers/workspaceFixture'
+import { createAnalysedSurvey } from '../helpers/analysedSurveys'
 
 let services: TestServices
 let ringdown: RingdownApp
@@ -21,7 +22,7 @@ let owner: ApiAgent
 beforeAll(async () => {
   mailDir = await mkdtemp(path.join(tmpdir(), 'ringdown-mail-'))
   inbox = await startFakeSmtpInbox({ port: 0, mailDir })
-  services = await startTestServices({ MAIL_DIR: mailDir, PUBLIC_URL: 'http://ringdown.test' })
+  services = await startTestServices({ MAIL_DIR: mailDir, PUBLIC_URL: 'http://ringdown.test', STORAGE_DIR: path.join(mailDir, 'files') })
   ringdown = createApp({ ...services, mailer: createSmtpMailer(`smtp://127.0.0.1:${inbox.port}`, 'Ringdown <no-reply@ringdown.invalid>') })
   a = await createWorkspaceFixture('Mu')
   owner = await signedInAgent(ringdown.app, a.users.owner.email, FIXTURE_PASSWORD)
@@ -114,8 +115,12 @@ describe('password reset', () => {
 
 describe('read-only share links', () => {
   it('shows the comparison signed out and stops working when revoked', async () => {
-    const second = await Survey.create({ roomId: a.sharedRoom.id, name: 'After panels', measuredOn: '2026-02-01', temperatureC: null, humidityPercent: null })
-    const created = await owner.post(`/api/rooms/${a.sharedRoom.id}/share-links`, { surveyIds: [a.sharedSurvey.id, second.id], label: 'For the client', expiresInDays: 30 })
+    // Sharing freezes a report revision, so the surveys need analysed positions (an empty one is refused).
+    const empty = await Survey.create({ roomId: a.sharedRoom.id, name: 'Not measured yet', measuredOn: '2026-02-01', temperatureC: null, humidityPercent: null })
+    expect((await owner.post(`/api/rooms/${a.sharedRoom.id}/share-links`, { surveyIds: [a.sharedSurvey.id, empty.id] })).status).toBe(409)
+    const first = await createAnalysedSurvey(a.sharedRoom, { name: 'Bare room', t60S: 0.6, positions: 1, store: services.store, seed: 5 })
+    const second = await createAnalysedSurvey(a.sharedRoom, { name: 'After panels', t60S: 0.2, positions: 1, store: services.store, seed: 6 })
+    const created = await owner.post(`/api/rooms/${a.sharedRoom.id}/share-links`, { surveyIds: [first.id, second.id], label: 'For the client', expiresInDays: 30 })
     expect(created.status).toBe(201)
     const shareToken = tokenIn(created.body.url, 'shared')
     const shown = await request(ringdown.app).get(`/api/shared/${shareToken}`)

@@ -65,7 +65,7 @@ describe('GET /api/rooms/:roomId/comparison', () => {
     expect(verdictAt(1, 1000)).toBe('inside')
     const at1k = response.body.differences.find((d: { centreHz: number }) => d.centreHz === 1000)
     expect(at1k.changeS).toBeLessThan(-0.3)
-    expect(response.body.summaryLine).toMatch(/^After panels: \d of \d octave bands inside the target \(was 0\); mid-band T fell from 0\.\d\d s to 0\.\d\d s\.$/)
+    expect(response.body.summaryLine).toMatch(/^After panels: \d of \d judged octave bands inside the target \(was 0 of \d\); (\d bands? not reliable; )?mid-band T fell from 0\.\d\d s to 0\.\d\d s\.$/)
   })
 
   it('refuses surveys of another room (400) and another workspace (404)', async () => {
@@ -84,7 +84,7 @@ describe('exports', () => {
     expect(csv.headers['content-type']).toMatch(/text\/csv/)
     expect(csv.headers['content-disposition']).toMatch(/^attachment; filename="?ringdown-comparison-\d+-\d+-\d+\.csv"?$/)
     const lines = csv.text.trim().split('\r\n')
-    expect(lines[0]).toBe('band_hz,Bare room T_s,After panels T_s,change_s,change_percent,target_min_s,target_max_s,Bare room verdict,After panels verdict')
+    expect(lines[0]).toBe('band_hz,Bare room T_s,Bare room sigma_s,After panels T_s,After panels sigma_s,change_s,change_percent,target_min_s,target_max_s,Bare room verdict,After panels verdict')
     expect(lines).toHaveLength(1 + 8)
     const json = await engineer.get(`/api/rooms/${a.sharedRoom.id}/comparison/export?surveys=${before.id},${after.id}&format=json`)
     expect(JSON.parse(json.text).summaryLine).toMatch(/After panels/)

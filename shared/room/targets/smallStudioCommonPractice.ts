@@ -10,8 +10,10 @@ export function smallStudioCommonPracticeMask(bandsHz: readonly number[]): Targe
   return {
     id: 'small-studio-common-practice',
     name: 'Small studio (common practice)',
-    source: 'Common practice, no published source: 0.2–0.4 s flat over 200 Hz–4 kHz',
-    notes: ['A rule of thumb of the trade, not a standard.', 'No limits below 200 Hz or above 4 kHz.'],
+    kind: 'common-practice',
+    citation: null,
+    sourceNote: null,
+    notes: ['A rule of thumb of the trade, not a standard: 0.2–0.4 s over 200 Hz–4 kHz.', 'No limits below 200 Hz or above 4 kHz.'],
     bands: bandsHz.map((centreHz) =>
       isBandWithin(centreHz, 200, 4000) ? { centreHz, minS: 0.2, maxS: 0.4, nominalS: 0.3 } : { centreHz, minS: null, maxS: null, nominalS: null },
     ),

@@ -56,6 +56,22 @@ export function defaultTargetId(use: RoomUse): TargetId {
   }
 }
 
+/** The published and common-practice targets a room can choose, with their names for pickers. */
+export const TARGET_LABELS: Record<TargetId, string> = {
+  'ebu-tech-3276': 'Reference listening room (EBU Tech 3276 / ITU-R BS.1116)',
+  'din-18041-a1': 'DIN 18041 group A1 (music)',
+  'din-18041-a2': 'DIN 18041 group A2 (speech / lecture)',
+  'din-18041-a3': 'DIN 18041 group A3 (teaching / communication)',
+  'din-18041-a4': 'DIN 18041 group A4 (teaching, inclusive)',
+  'din-18041-a5': 'DIN 18041 group A5 (sport)',
+  'ansi-s12-60': 'Core learning space (ANSI/ASA S12.60)',
+  'small-studio-common-practice': 'Small studio (common practice)',
+}
+
+export function isTargetId(value: string): value is TargetId {
+  return (TARGET_IDS as readonly string[]).includes(value)
+}
+
 /** Builds the target mask for a room: explicit targetId if given, else the default for its use. */
 export function targetForRoom(room: { use: RoomUse; volumeM3: number; targetId?: TargetId }, bandsHz: readonly number[] = OCTAVE_CENTRES_HZ): TargetMask {
   const id = room.targetId ?? defaultTargetId(room.use)

@@ -6,12 +6,28 @@ export interface TargetBand {
   nominalS: number | null
 }
 
+/** Where a published target comes from, as a client reads it: standard, edition and clause. */
+export interface TargetCitation {
+  standard: string
+  edition: string
+  clause: string
+}
+
+/**
+ * published: a standard's mask; common-practice: a rule of the trade without a standard behind it;
+ * custom: limits a workspace defined itself, with its own source note.
+ */
+export type TargetKind = 'published' | 'common-practice' | 'custom'
+
 export interface TargetMask {
   id: string
   name: string
-  /** The publication the mask comes from, with any "from memory — verify" caveat. */
-  source: string
-  /** Caveats carried from the facts file, shown beside the mask. */
+  kind: TargetKind
+  /** Set for published targets; null for common practice and custom targets. */
+  citation: TargetCitation | null
+  /** Where a custom target's limits come from (required for custom targets); null otherwise. */
+  sourceNote: string | null
+  /** Plain notes shown beside the mask (how it is evaluated); never internal provenance. */
   notes: string[]
   bands: TargetBand[]
 }

@@ -3,7 +3,7 @@ import type { PredictedBand } from '@shared/room'
 import type { MeasuredSurvey } from '@/roomModel/measuredSurvey'
 import { LOW_BAND_RANGE_HZ, meanInRange, MID_BAND_RANGE_HZ, pickReverberationBasis } from '@/roomModel/reverberationBasis'
 
-const reading = (centreHz: number, reverberationTimeS: number | null) => ({ centreHz, reverberationTimeS, parameter: 'T30' as const, isReliable: true, reliabilityNote: null })
+const reading = (centreHz: number, reverberationTimeS: number | null) => ({ centreHz, reverberationTimeS, parameter: 'T30' as const, isReliable: true, isAnalysed: true, positionCount: 2, uncertaintyS: null, reliabilityNote: null })
 const survey = (surveyId: number, name: string, measuredOn: string, values: [number, number | null][]): MeasuredSurvey => ({ surveyId, name, measuredOn, temperatureC: 20, humidityPercent: 50, readings: values.map(([f, t]) => reading(f, t)) })
 const predicted = (centreHz: number, sabineS: number | null): PredictedBand => ({ centreHz, sabineS, eyringS: null, absorptionAreaM2: null, airAbsorptionM2: 0, meanAbsorption: null, missingMaterials: [] })
 

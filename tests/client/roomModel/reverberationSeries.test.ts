@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { measuredSurveySeries, predictedReverberationSeries, surveyRole } from '@/roomModel/reverberationSeries'
 
-const reading = (centreHz: number, reverberationTimeS: number | null) => ({ centreHz, reverberationTimeS, parameter: 'T30' as const, isReliable: true, reliabilityNote: null })
+const reading = (centreHz: number, reverberationTimeS: number | null) => ({ centreHz, reverberationTimeS, parameter: 'T30' as const, isReliable: true, isAnalysed: true, positionCount: 2, uncertaintyS: null, reliabilityNote: null })
 
 describe('surveyRole', () => {
   it('returns single for one survey, and before … after for several in date order', () => {

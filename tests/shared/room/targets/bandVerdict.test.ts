@@ -18,13 +18,17 @@ describe('bandVerdict', () => {
     expect(bandVerdict({ reverberationTimeS: null, isReliable: true }, BAND)).toBe('not-reliable')
   })
 
+  it('returns not-analysed, never not-reliable, for a band no position was analysed in', () => {
+    expect(bandVerdict({ reverberationTimeS: null, isReliable: false, isAnalysed: false }, BAND)).toBe('not-analysed')
+  })
+
   it('returns no-target where the mask sets no limit', () => {
     expect(bandVerdict({ reverberationTimeS: 0.9, isReliable: true }, { centreHz: 63, minS: null, maxS: null, nominalS: null })).toBe('no-target')
   })
 })
 
 describe('bandVerdicts', () => {
-  it('returns one verdict per mask band, not-reliable where nothing was measured', () => {
+  it('returns one verdict per mask band, not-analysed where nothing was measured', () => {
     const mask = smallStudioCommonPracticeMask([125, 250, 500, 1000])
     const verdicts = bandVerdicts(
       [
@@ -34,6 +38,6 @@ describe('bandVerdicts', () => {
       ],
       mask,
     )
-    expect(verdicts.map((v) => v.verdict)).toEqual(['no-target', 'too-live', 'inside', 'not-reliable'])
+    expect(verdicts.map((v) => v.verdict)).toEqual(['no-target', 'too-live', 'inside', 'not-analysed'])
   })
 })

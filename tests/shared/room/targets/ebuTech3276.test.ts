@@ -40,9 +40,11 @@ describe('ebuTech3276Mask', () => {
     expectWithin(band(8000).maxS!, tm + 0.05, 1e-12)
   })
 
-  it('returns its source and the from-memory caveat', () => {
-    expect(mask.source).toContain('EBU Tech 3276')
-    expect(mask.notes.join(' ')).toContain('from memory — verify')
+  it('returns its standard, edition and clause, and notes without internal provenance', () => {
+    expect(mask.kind).toBe('published')
+    expect(mask.citation).toMatchObject({ standard: expect.stringContaining('EBU Tech 3276'), edition: 'ITU-R BS.1116-3' })
+    expect(mask.citation!.clause).toContain('Fig. 3')
+    expect(JSON.stringify(mask)).not.toMatch(/from memory|verify|facts|§/i)
     expect(mask.bands.every((b) => b.nominalS === ebuMeanReverberationTimeS(100))).toBe(true)
   })
 })

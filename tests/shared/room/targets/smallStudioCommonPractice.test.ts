@@ -6,6 +6,7 @@ describe('smallStudioCommonPracticeMask', () => {
     // small home studios: ≈ 0.2–0.4 s flat over 200 Hz–4 kHz (common practice, no source; facts §9)
     const mask = smallStudioCommonPracticeMask([125, 200, 1000, 4000, 8000])
     expect(mask.bands.map((b) => [b.minS, b.maxS])).toEqual([[null, null], [0.2, 0.4], [0.2, 0.4], [0.2, 0.4], [null, null]])
-    expect(mask.source).toContain('Common practice')
+    expect(mask.kind).toBe('common-practice')
+    expect(mask.citation).toBeNull()
   })
 })

@@ -28,11 +28,12 @@ describe('targetForRoom', () => {
     expect(targetForRoom({ use: 'other', volumeM3: 200, targetId: 'din-18041-a4' }).name).toContain('A4')
   })
 
-  it('returns a mask with a source string for every target id', () => {
+  it('returns a mask with a citation (or common-practice kind) and no provenance wording for every target id', () => {
     for (const targetId of TARGET_IDS) {
       const target = targetForRoom({ use: 'other', volumeM3: 200, targetId })
       expect(target.id).toBe(targetId)
-      expect(target.source.length).toBeGreaterThan(10)
+      expect(target.kind === 'common-practice' || (target.citation?.standard.length ?? 0) > 3).toBe(true)
+      expect(JSON.stringify(target)).not.toMatch(/from memory|verify|facts|§/i)
       expect(target.bands).toHaveLength(OCTAVE_CENTRES_HZ.length)
     }
   })

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import type { MeasuredBand } from '../../../../shared/room/targets/bandVerdict'
 import { ebuTech3276Mask } from '../../../../shared/room/targets/ebuTech3276'
 import { OCTAVE_CENTRES_HZ } from '../../../../shared/room/targets/targetForRoom'
-import { midBandReverberationS, summarizeVerdictChange } from '../../../../shared/room/targets/verdictChangeSummary'
+import { countVerdicts, midBandReverberationS, summarizeVerdictChange } from '../../../../shared/room/targets/verdictChangeSummary'
 import { expectWithin } from '../../../helpers/tolerance'
 
 const bands = (values: number[], reliable = values.map(() => true)): MeasuredBand[] =>
@@ -24,14 +24,30 @@ describe('summarizeVerdictChange', () => {
     const before = bands([0.9, 0.8, 0.7, 0.6, 0.64, 0.29, 0.28, 0.26])
     const after = bands([0.45, 0.4, 0.27, 0.29, 0.33, 0.26, 0.24, 0.1])
     const line = summarizeVerdictChange({ afterLabel: 'After panels', before, after, mask, bandKind: 'octave' })
-    expect(line).toBe('After panels: 6 of 8 octave bands inside the target (was 3); mid-band T fell from 0.62 s to 0.31 s.')
+    expect(line).toBe('After panels: 6 of 8 judged octave bands inside the target (was 3 of 8); mid-band T fell from 0.62 s to 0.31 s.')
   })
 
-  it('returns a line without mid-band T when it cannot be computed', () => {
+  it('returns a line that judges nothing and names the unreliable bands when every band is flagged', () => {
     const mask = ebuTech3276Mask(100, OCTAVE_CENTRES_HZ)
     const flagged = bands([0.3, 0.3, 0.3, 0.3, 0.3, 0.3, 0.3, 0.3], Array(8).fill(false))
     expect(summarizeVerdictChange({ afterLabel: 'Bass traps', before: flagged, after: flagged, mask, bandKind: 'octave' })).toBe(
-      'Bass traps: 0 of 8 octave bands inside the target (was 0); mid-band T not available.',
+      'Bass traps: no octave band could be judged; 8 bands not reliable; mid-band T not available.',
     )
+  })
+
+  it('says "not analysed" and counts no band when nothing was analysed in these bands', () => {
+    const mask = ebuTech3276Mask(100, [100, 125, 160])
+    const before = [100, 125, 160].map((centreHz) => ({ centreHz, reverberationTimeS: 0.5, isReliable: true }))
+    const line = summarizeVerdictChange({ afterLabel: 'After', before, after: [], mask, bandKind: 'third-octave' })
+    expect(line).toBe('After: not analysed in third-octave bands yet, so no band was judged.')
+    expect(line).not.toContain('reliable')
+  })
+
+  it('counts only judged bands when some bands are not analysed', () => {
+    const mask = ebuTech3276Mask(100, OCTAVE_CENTRES_HZ)
+    const after = bands([0.45, 0.4, 0.27, 0.29, 0.33, 0.26, 0.24, 0.1]).map((b, i) => (i < 2 ? { ...b, reverberationTimeS: null, isReliable: false, isAnalysed: false } : b))
+    const counts = countVerdicts(after, mask)
+    expect(counts).toMatchObject({ judged: 6, notAnalysed: 2, notReliable: 0 })
+    expect(summarizeVerdictChange({ afterLabel: 'After', before: after, after, mask, bandKind: 'octave' })).toContain('4 of 6 judged octave bands inside the target (was 4 of 6); 2 bands not analysed yet')
   })
 })
