@@ -20,6 +20,8 @@ import { capturesRouter } from './routes/capturesRouter'
 import { resultsRouter } from './routes/resultsRouter'
 import { roomModelRouter } from './routes/roomModelRouter'
 import { invitationsRouter } from './routes/invitationsRouter'
+import { surveyEventsRouter } from './routes/surveyEventsRouter'
+import { createSurveyEventHub, type SurveyEventHub } from './events/surveyEventHub'
 import { createSmtpMailer, type Mailer } from './mail/mailer'
 import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
@@ -38,6 +40,8 @@ export interface AppDependencies {
   queue?: AnalysisQueue
   /** Defaults to SMTP_URL, else the local fake inbox on FAKE_SMTP_PORT. */
   mailer?: Mailer
+  /** Live status streams; defaults to one fed by the database's change notifications. */
+  events?: SurveyEventHub
 }
 
 export const APP_VERSION = '0.1.0'
@@ -49,6 +53,7 @@ function isLoopback(address: string): boolean {
 export interface RingdownApp {
   app: Express
   queue: AnalysisQueue
+  events: SurveyEventHub
   /** Closes what the app itself opened (the session store's pool, the queue). */
   close: () => Promise<void>
 }
@@ -58,8 +63,9 @@ export function createApp({
   sequelize,
   redis,
   clientDir = path.resolve('dist'),
-  queue = createAnalysisQueue(redis),
+  queue = createAnalysisQueue(redis, { prefix: config.QUEUE_PREFIX }),
   mailer = createSmtpMailer(config.SMTP_URL ?? `smtp://127.0.0.1:${config.FAKE_SMTP_PORT}`, config.MAIL_FROM),
+  events = createSurveyEventHub({ databaseUrl: config.DATABASE_URL }),
 }: AppDependencies): RingdownApp {
   initModels(sequelize)
   const mail = { mailer, publicUrl: config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}` }
@@ -123,6 +129,7 @@ export function createApp({
   app.use('/api', resultsRouter({ queue }))
   app.use('/api', roomModelRouter())
   app.use('/api', invitationsRouter(mail))
+  app.use('/api', surveyEventsRouter(events))
   if (!config.SMTP_URL && isLoopback(config.HOST)) {
     // The development mailbox: only while mail goes to the local fake inbox, the server listens on
     // loopback and the request comes from this machine (it shows reset links, so never further).
@@ -139,5 +146,5 @@ export function createApp({
     app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
   }
   app.use(errorHandler)
-  return { app, queue, close: async () => { mailer.close(); await Promise.allSettled([sessionPool.end(), queue.close()]) } }
+  return { app, queue, events, close: async () => { mailer.close(); await Promise.allSettled([events.close(), sessionPool.end(), queue.close()]) } }
 }

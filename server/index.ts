@@ -3,7 +3,7 @@ import { loadConfig } from './config'
 import { createSequelize } from './db/createSequelize'
 import { createApp } from './app'
 import { logger } from './logger'
-import { requeueUploadedCaptures } from './services/capturesService'
+import { superviseAnalysisQueue } from './services/analysisJobsService'
 import { startFakeSmtpInbox } from './mail/fakeSmtpInbox'
 
 // The only file that listens. Stops accepting connections on SIGTERM/SIGINT, then closes pools.
@@ -16,10 +16,11 @@ const fakeInbox = config.SMTP_URL ? null : await startFakeSmtpInbox({ port: conf
 if (fakeInbox) logger.info(`fake SMTP inbox on 127.0.0.1:${fakeInbox.port}, messages in ${config.MAIL_DIR}`)
 const { app, queue, close } = createApp({ config, sequelize, redis })
 
-// Captures accepted while Redis was down stay `uploaded`; queue them once it answers again.
+// Analyses accepted while Redis was down wait without a job; queue them once it answers again, and
+// settle rows whose job BullMQ lost (see superviseAnalysisQueue).
 const REQUEUE_INTERVAL_MS = 10_000
 function requeuePass() {
-  requeueUploadedCaptures(queue).catch((error: unknown) => logger.warn({ err: error }, 'requeue pass failed'))
+  superviseAnalysisQueue(queue).catch((error: unknown) => logger.warn({ err: error }, 'requeue pass failed'))
 }
 requeuePass()
 const requeueTimer = setInterval(requeuePass, REQUEUE_INTERVAL_MS)

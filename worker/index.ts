@@ -1,27 +1,29 @@
 import { Worker } from 'bullmq'
 import { Redis } from 'ioredis'
-import { loadConfig } from '../server/config'
+import { loadWorkerConfig } from '../server/config'
 import { createSequelize } from '../server/db/createSequelize'
 import { initModels } from '../server/models'
 import { logger } from '../server/logger'
 import { ANALYSIS_QUEUE_NAME, type AnalysisJobPayload } from '../shared/jobs/analysisJob'
 import { processAnalysisJob } from './processAnalysisJob'
 
-// `npm run worker`: consumes the analysis queue. Safe to run many times against one Redis and one
-// PostgreSQL; on SIGTERM it finishes the job in hand, then exits.
-const config = loadConfig()
+// `npm run worker`: consumes the analysis queue. Safe to run many times, on many machines, against
+// one Redis and one PostgreSQL (it needs only DATABASE_URL, REDIS_URL and the file store); on
+// SIGTERM it finishes the job in hand, then exits.
+const config = loadWorkerConfig()
 const sequelize = createSequelize(config.DATABASE_URL)
 initModels(sequelize)
 const connection = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null })
 
 const worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { storageDir: config.STORAGE_DIR }), {
   connection,
-  concurrency: 1,
+  prefix: config.QUEUE_PREFIX,
+  concurrency: config.WORKER_CONCURRENCY,
   lockDuration: config.WORKER_LOCK_DURATION_MS,
   stalledInterval: config.WORKER_STALLED_INTERVAL_MS,
 })
-worker.on('ready', () => logger.info({ queue: ANALYSIS_QUEUE_NAME }, 'worker ready'))
-worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data.captureId }, 'analysis done'))
+worker.on('ready', () => logger.info({ queue: ANALYSIS_QUEUE_NAME, prefix: config.QUEUE_PREFIX }, 'worker ready'))
+worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data.captureId, analysisId: job.data.analysisId }, 'analysis done'))
 worker.on('failed', (job, error) => logger.warn({ jobId: job?.id, err: error }, 'analysis failed'))
 worker.on('error', (error) => logger.error({ err: error }, 'worker error'))
 

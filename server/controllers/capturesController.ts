@@ -2,7 +2,7 @@ import type { Request, Response, NextFunction } from 'express'
 import { currentUserId } from '../middleware/requireAuth'
 import * as captures from '../services/capturesService'
 import type { AnalysisQueue } from '../queue/analysisQueue'
-import type { CreateCaptureFields } from '../../shared/api/captures'
+import type { CreateCaptureFields, ListCapturesQuery } from '../../shared/api/captures'
 
 type SurveyParams = { surveyId: number }
 type CaptureParams = { captureId: number }
@@ -30,7 +30,8 @@ export function create(context: { storageDir: string; queue: AnalysisQueue }) {
 }
 
 export async function list(req: Request, res: Response) {
-  res.json(await captures.listCaptures(currentUserId(req), (req.params as unknown as SurveyParams).surveyId))
+  const { surveyId } = req.params as unknown as SurveyParams
+  res.json(await captures.listCaptures(currentUserId(req), surveyId, req.query as unknown as ListCapturesQuery))
 }
 
 export async function show(req: Request, res: Response) {

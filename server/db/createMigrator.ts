@@ -4,6 +4,9 @@ import * as initial from '../migrations/0001-initial'
 import * as analyses from '../migrations/0002-analyses'
 import * as roomModels from '../migrations/0003-room-models'
 import * as invitationsSharesActivity from '../migrations/0004-invitations-shares-activity'
+import * as analysisJobRecord from '../migrations/0010-analysis-job-record'
+import * as analysisHeadlineColumns from '../migrations/0011-analysis-headline-columns'
+import * as analysisChangeNotifications from '../migrations/0012-analysis-change-notifications'
 
 /**
  * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
@@ -14,6 +17,9 @@ const MIGRATIONS = [
   { name: '0002-analyses', module: analyses },
   { name: '0003-room-models', module: roomModels },
   { name: '0004-invitations-shares-activity', module: invitationsSharesActivity },
+  { name: '0010-analysis-job-record', module: analysisJobRecord },
+  { name: '0011-analysis-headline-columns', module: analysisHeadlineColumns },
+  { name: '0012-analysis-change-notifications', module: analysisChangeNotifications },
 ]
 
 export function createMigrator(sequelize: Sequelize) {

@@ -4,6 +4,8 @@ import path from 'node:path'
 import type { Transaction } from 'sequelize'
 import { Capture, type Survey } from '../models'
 import { storeUploadedFile } from '../storage/storeUploadedFile'
+import { recordAnalysisRequest } from '../services/analysisJobsService'
+import { defaultSettingsOf } from '../services/capturesService'
 import { synthesizeRoomImpulse } from '../../shared/acoustics/synthetic/synthesizeRoomImpulse'
 import { encodeWav } from '../../shared/acoustics/wav/encodeWav'
 
@@ -26,7 +28,7 @@ const POSITIONS = [
 
 const SAMPLE_RATE_HZ = 48_000
 
-/** Writes one synthetic capture per position into storage and the database, status `uploaded`. */
+/** Writes one synthetic capture per position into storage and the database, with a queued analysis (`uploaded`). */
 export async function createDemoCaptures(survey: Survey, condition: keyof typeof DEMO_CONDITIONS, storageDir: string, transaction: Transaction): Promise<void> {
   const scratch = await mkdtemp(path.join(tmpdir(), 'ringdown-demo-'))
   try {
@@ -45,7 +47,7 @@ export async function createDemoCaptures(survey: Survey, condition: keyof typeof
       const tempPath = path.join(scratch, `position-${index + 1}.wav`)
       await writeFile(tempPath, bytes)
       const { sha256 } = await storeUploadedFile(storageDir, tempPath)
-      await Capture.create(
+      const capture = await Capture.create(
         {
           surveyId: survey.id,
           uploadedById: null,
@@ -66,11 +68,11 @@ export async function createDemoCaptures(survey: Survey, condition: keyof typeof
           bitDepth: 24,
           channelCount: 1,
           durationS: impulse.length / SAMPLE_RATE_HZ,
-          status: 'uploaded',
-          statusMessage: 'Waiting for the queue',
         },
         { transaction },
       )
+      // Its job record, not yet in the queue: the server's queue pass sends it once it runs.
+      await recordAnalysisRequest(capture.id, defaultSettingsOf(capture), { transaction })
     }
   } finally {
     await rm(scratch, { recursive: true, force: true })

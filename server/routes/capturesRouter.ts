@@ -6,7 +6,7 @@ import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { captureUpload } from '../middleware/upload'
 import { idParam } from '../../shared/api/common'
-import { createCaptureFieldsSchema } from '../../shared/api/captures'
+import { createCaptureFieldsSchema, listCapturesQuerySchema } from '../../shared/api/captures'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 
 const surveyParams = z.object({ surveyId: idParam })
@@ -24,7 +24,7 @@ const validateFieldsOrDiscard: RequestHandler = (req, res, next) => {
 
 export function capturesRouter(context: { storageDir: string; uploadLimitMb: number; queue: AnalysisQueue }) {
   const router = Router()
-  router.get('/surveys/:surveyId/captures', requireAuth, validate({ params: surveyParams }), captures.list)
+  router.get('/surveys/:surveyId/captures', requireAuth, validate({ params: surveyParams, query: listCapturesQuerySchema }), captures.list)
   router.post(
     '/surveys/:surveyId/captures',
     requireAuth,

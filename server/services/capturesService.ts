@@ -8,13 +8,14 @@ import { storeUploadedFile } from '../storage/storeUploadedFile'
 import { contentPath } from '../storage/contentPath'
 import { readWavFacts } from '../../shared/acoustics/wav/readWavFacts'
 import { DspInputError } from '../../shared/acoustics/errors'
+import { literal, Op, type OrderItem } from 'sequelize'
 import type { AnalysisQueue } from '../queue/analysisQueue'
-import type { AnalysisDto, CaptureDto, CaptureHeadline, CreateCaptureFields } from '../../shared/api/captures'
-import type { AnalysisResult } from '../../shared/types/analysis'
-import { latestAnalysesByCapture } from './analysisLookup'
-import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
-import { logger } from '../logger'
+import type { AnalysisDto, CaptureDto, CapturePageDto, CaptureSortKey, CreateCaptureFields, ListCapturesQuery } from '../../shared/api/captures'
+import type { AnalysisSettings } from '../../shared/types/analysis'
+import { DEFAULT_ANALYSIS_SETTINGS } from '../../shared/jobs/analysisSettingsKey'
 import { recordActivity } from './activityService'
+import { dispatchAnalysis, recordAnalysisRequest } from './analysisJobsService'
+import { captureViewOf, loadCaptureViews, toStateRow, type AnalysisStateRow, type CaptureView } from './captureStates'
 
 export interface UploadedFile {
   path: string
@@ -22,7 +23,7 @@ export interface UploadedFile {
   size: number
 }
 
-export function toCaptureDto(capture: Capture): CaptureDto {
+export function toCaptureDto(capture: Capture, view: CaptureView): CaptureDto {
   return {
     id: capture.id,
     surveyId: capture.surveyId,
@@ -45,8 +46,10 @@ export function toCaptureDto(capture: Capture): CaptureDto {
     bitDepth: capture.bitDepth,
     channelCount: capture.channelCount,
     durationS: capture.durationS,
-    status: capture.status,
-    statusMessage: capture.statusMessage,
+    status: view.state.status,
+    statusMessage: view.state.statusMessage,
+    shownAnalysisId: view.state.shownAnalysisId,
+    headline: view.headline,
     createdAt: capture.createdAt.toISOString(),
     updatedAt: capture.updatedAt.toISOString(),
   }
@@ -74,10 +77,11 @@ export async function assertMayAddCapture(userId: number, surveyId: number): Pro
 }
 
 /**
- * Validates the uploaded WAV(s), stores them content-addressed, writes the capture row and enqueues
- * its analysis. On any failure nothing is left behind: temporary files are removed, and a newly
- * stored file is removed again when its row could not be written. When Redis is down the capture
- * stays `uploaded` and {@link requeueUploadedCaptures} queues it once Redis is back.
+ * Validates the uploaded WAV(s), stores them content-addressed, writes the capture row with the job
+ * record of its first analysis and enqueues it. On any failure nothing is left behind: temporary
+ * files are removed, and a newly stored file is removed again when its row could not be written.
+ * When Redis is down the capture reads `uploaded` and the server's queue pass
+ * (superviseAnalysisQueue) queues it once Redis is back.
  */
 export async function createCapture(
   userId: number,
@@ -106,25 +110,31 @@ export async function createCapture(
     if (stored.isNew) newlyStored.push(stored.sha256)
     const reference = files.reference ? await storeUploadedFile(context.storageDir, files.reference.path) : null
     if (reference?.isNew) newlyStored.push(reference.sha256)
-    const capture = await Capture.create({
-      ...fields,
-      surveyId,
-      uploadedById: userId,
-      referenceSha256: reference?.sha256 ?? null,
-      originalName: files.file.originalname.slice(0, 255),
-      sha256: stored.sha256,
-      byteSize: files.file.size,
-      sampleRateHz: facts.sampleRateHz,
-      bitDepth: facts.bitDepth,
-      channelCount: facts.channelCount,
-      durationS: facts.durationS,
-      status: 'uploaded',
-      statusMessage: 'Waiting for the queue',
+    // The capture and its first job record are written together: no capture is ever without one.
+    const { capture, analysis } = await Capture.sequelize!.transaction(async (transaction) => {
+      const created = await Capture.create(
+        {
+          ...fields,
+          surveyId,
+          uploadedById: userId,
+          referenceSha256: reference?.sha256 ?? null,
+          originalName: files.file!.originalname.slice(0, 255),
+          sha256: stored.sha256,
+          byteSize: files.file!.size,
+          sampleRateHz: facts.sampleRateHz,
+          bitDepth: facts.bitDepth,
+          channelCount: facts.channelCount,
+          durationS: facts.durationS,
+        },
+        { transaction },
+      )
+      const request = await recordAnalysisRequest(created.id, defaultSettingsOf(created), { transaction })
+      return { capture: created, analysis: request.analysis }
     })
     newlyStored.length = 0
-    await enqueueCapture(capture, context.queue)
+    await dispatchAnalysis(analysis, context.queue)
     await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.uploaded', summary: `uploaded ${capture.originalName} (${capture.receiverLabel || 'no position label'})` })
-    return toCaptureDto(capture)
+    return toCaptureDto(capture, captureViewOf([toStateRow(analysis)]))
   } catch (error) {
     await Promise.all(newlyStored.map((sha) => rm(contentPath(context.storageDir, sha), { force: true })))
     throw error
@@ -133,42 +143,61 @@ export async function createCapture(
   }
 }
 
-/** Enqueues the default analysis; a Redis outage leaves the capture `uploaded` for the requeue loop. */
-export async function enqueueCapture(capture: Capture, queue: AnalysisQueue, settingsKey = settingsToKey({ ...DEFAULT_ANALYSIS_SETTINGS, channel: capture.channel })): Promise<void> {
-  try {
-    await queue.enqueue({ captureId: capture.id, settingsKey })
-    await capture.update({ status: 'queued', statusMessage: 'Waiting for a worker' })
-  } catch (error) {
-    logger.warn({ err: error, captureId: capture.id }, 'could not enqueue; will retry')
+/** The settings of a capture's first analysis: the engine's defaults on the capture's channel. */
+export function defaultSettingsOf(capture: Pick<Capture, 'channel'>): AnalysisSettings {
+  return { ...DEFAULT_ANALYSIS_SETTINGS, channel: capture.channel }
+}
+
+/**
+ * ORDER BY value of a headline column of the analysis a capture shows: its newest done analysis,
+ * as deriveCaptureState picks it (shared/jobs/captureState.ts; a pin, when captures have one,
+ * comes first there and must come first here).
+ */
+const shownHeadline = (column: string) =>
+  literal(`(SELECT a.${column} FROM analyses a WHERE a.capture_id = "Capture"."id" AND a.status = 'done' ORDER BY a.finished_at DESC NULLS LAST, a.id DESC LIMIT 1)`)
+
+const HEADLINE_COLUMNS = { T30: 'headline_t30_s', EDT: 'headline_edt_s', C80: 'headline_c80_db' } as const
+
+function orderOf(sort: CaptureSortKey, order: 'asc' | 'desc'): OrderItem[] {
+  const direction = order === 'asc' ? 'ASC' : 'DESC'
+  const byId: OrderItem = ['id', 'ASC']
+  switch (sort) {
+    case 'uploaded':
+      return [['id', direction]]
+    case 'receiver':
+      return [['receiverLabel', direction], byId]
+    case 'source':
+      return [['sourceLabel', direction], byId]
+    case 'kind':
+      return [['kind', direction], byId]
+    default:
+      return [[shownHeadline(HEADLINE_COLUMNS[sort]), `${direction} NULLS LAST`], byId]
   }
 }
 
-/** Queues every capture still `uploaded` (e.g. accepted while Redis was down). Returns how many. */
-export async function requeueUploadedCaptures(queue: AnalysisQueue): Promise<number> {
-  const waiting = await Capture.findAll({ where: { status: 'uploaded' }, limit: 100, order: [['id', 'ASC']] })
-  for (const capture of waiting) await enqueueCapture(capture, queue)
-  return waiting.filter((c) => c.status === 'queued').length
-}
+const HAS_DONE_ANALYSIS = `EXISTS (SELECT 1 FROM analyses a WHERE a.capture_id = "Capture"."id" AND a.status = 'done')`
 
-/** Mid-band (500 Hz and 1 kHz octaves, or the thirds 400 Hz–1.25 kHz) mean of a parameter. */
-function midBand(result: AnalysisResult, parameter: 'T30' | 'T20' | 'EDT' | 'C80'): number | null {
-  const values = result.bands
-    .filter((band) => band.centreHz >= 355 && band.centreHz <= 1413)
-    .map((band) => band[parameter])
-    .filter((value): value is number => value !== null)
-  return values.length === 0 ? null : values.reduce((sum, value) => sum + value, 0) / values.length
-}
-
-export function headlineOf(result: AnalysisResult | undefined): CaptureHeadline | null {
-  if (!result) return null
-  return { T30S: midBand(result, 'T30'), T20S: midBand(result, 'T20'), EDTS: midBand(result, 'EDT'), C80Db: midBand(result, 'C80') }
-}
-
-export async function listCaptures(userId: number, surveyId: number): Promise<CaptureDto[]> {
+/**
+ * One page of a survey's captures, ordered on the server, each with its derived state and the
+ * headline figures of the analysis it shows, read from columns: no analysis result is loaded.
+ */
+export async function listCaptures(userId: number, surveyId: number, query: ListCapturesQuery): Promise<CapturePageDto> {
   await requireSurveyAccess(userId, surveyId, 'room:read')
-  const captures = await Capture.findAll({ where: { surveyId }, order: [['id', 'ASC']] })
-  const analyses = await latestAnalysesByCapture(captures.map((c) => c.id))
-  return captures.map((capture) => ({ ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }))
+  const filters = query.analysed === undefined ? [] : [literal(query.analysed ? HAS_DONE_ANALYSIS : `NOT ${HAS_DONE_ANALYSIS}`)]
+  const { rows, count } = await Capture.findAndCountAll({
+    where: { surveyId, [Op.and]: filters },
+    order: orderOf(query.sort, query.order),
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  })
+  const views = await loadCaptureViews(rows)
+  return { items: rows.map((capture) => toCaptureDto(capture, views.get(capture.id)!)), total: count, page: query.page, pageSize: query.pageSize }
+}
+
+/** One capture as the list and the live stream show it. */
+export async function describeCapture(capture: Capture, override?: AnalysisStateRow): Promise<CaptureDto> {
+  const views = await loadCaptureViews([capture], override)
+  return toCaptureDto(capture, views.get(capture.id)!)
 }
 
 /** Loads a capture the caller may read; a capture in a room they cannot see is a 404. */
@@ -187,8 +216,7 @@ export async function requireCaptureAccess(userId: number, captureId: number) {
 
 export async function getCapture(userId: number, captureId: number): Promise<CaptureDto> {
   const { capture } = await requireCaptureAccess(userId, captureId)
-  const analyses = await latestAnalysesByCapture([capture.id])
-  return { ...toCaptureDto(capture), headline: headlineOf(analyses.get(capture.id)?.result) }
+  return describeCapture(capture)
 }
 
 /** Owners and engineers delete any capture; a client only the ones they uploaded. */
@@ -203,17 +231,19 @@ export async function deleteCapture(userId: number, captureId: number, storageDi
   if (stillUsed === 0) await rm(contentPath(storageDir, capture.sha256), { force: true })
 }
 
-/** The newest analysis of a capture, or the one asked for by id. */
+/** The analysis a capture shows (see deriveCaptureState), or the one asked for by id; only done ones. */
 export async function getLatestAnalysis(userId: number, captureId: number, analysisId?: number): Promise<AnalysisDto> {
-  await requireCaptureAccess(userId, captureId)
-  const analysis = await Analysis.findOne({ where: { captureId, ...(analysisId ? { id: analysisId } : {}) }, order: [['updatedAt', 'DESC']] })
-  if (!analysis) throw new NotFoundError('An analysis of that capture', 'analysis-not-ready')
+  const { capture } = await requireCaptureAccess(userId, captureId)
+  const wantedId = analysisId ?? (await loadCaptureViews([capture])).get(capture.id)!.state.shownAnalysisId
+  const analysis = wantedId === null ? null : await Analysis.findOne({ where: { id: wantedId, captureId, status: 'done' } })
+  if (!analysis || !analysis.result) throw new NotFoundError('An analysis of that capture', 'analysis-not-ready')
   return {
     id: analysis.id,
     captureId,
     settingsKey: analysis.settingsKey,
-    engineVersion: analysis.engineVersion,
+    engineVersion: analysis.engineVersion ?? analysis.result.engineVersion,
     createdAt: analysis.createdAt.toISOString(),
+    finishedAt: analysis.finishedAt?.toISOString() ?? null,
     result: analysis.result,
   }
 }

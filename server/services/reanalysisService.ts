@@ -3,32 +3,45 @@ import { ForbiddenError, ValidationError } from '../errors'
 import { mayOnRoom } from '../policy/policy'
 import { requireCaptureAccess } from './capturesService'
 import type { AnalysisQueue } from '../queue/analysisQueue'
-import type { AnalysisListItemDto } from '../../shared/api/results'
+import type { AnalysisListItemDto, ReanalysisDto } from '../../shared/api/results'
 import type { AnalysisSettings } from '../../shared/types/analysis'
-import { keyToSettings, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
 import { recordActivity } from './activityService'
+import { dispatchAnalysis, recordAnalysisRequest } from './analysisJobsService'
 
+/** Every analysis of a capture (done, under way or failed) without results, oldest first. */
 export async function listAnalyses(userId: number, captureId: number): Promise<AnalysisListItemDto[]> {
   await requireCaptureAccess(userId, captureId)
-  const analyses = await Analysis.findAll({ where: { captureId }, attributes: ['id', 'settingsKey', 'engineVersion', 'createdAt'], order: [['createdAt', 'ASC']] })
-  return analyses.map((a) => ({ id: a.id, settings: keyToSettings(a.settingsKey), engineVersion: a.engineVersion, createdAt: a.createdAt.toISOString() }))
+  const analyses = await Analysis.findAll({ where: { captureId }, attributes: { exclude: ['result'] }, order: [['createdAt', 'ASC'], ['id', 'ASC']] })
+  return analyses.map((a) => ({
+    id: a.id,
+    settings: a.settings,
+    status: a.status,
+    statusMessage: a.statusMessage,
+    error: a.error,
+    attempts: a.attempts,
+    engineVersion: a.engineVersion,
+    createdAt: a.createdAt.toISOString(),
+    queuedAt: a.queuedAt.toISOString(),
+    finishedAt: a.finishedAt?.toISOString() ?? null,
+  }))
 }
 
 /**
- * Queues an analysis with other settings; the earlier analyses stay. Settings already analysed
- * are queued again only when the capture is not done (a retry), else answered as they are.
+ * Asks for an analysis with these settings; the capture's other analyses, and its state, stay as
+ * they are. New settings add a row; settings that failed before run again in the same row;
+ * settings done or under way are answered as they are (one row, one job).
  */
-export async function requestReanalysis(userId: number, captureId: number, settings: AnalysisSettings, queue: AnalysisQueue): Promise<{ captureId: number; settingsKey: string; status: 'queued' | 'exists' }> {
+export async function requestReanalysis(userId: number, captureId: number, settings: AnalysisSettings, queue: AnalysisQueue): Promise<ReanalysisDto> {
   const { capture, room, role, isShared } = await requireCaptureAccess(userId, captureId)
   if (!mayOnRoom(role, isShared, 'capture:create')) throw new ForbiddenError('Your role may not start analyses.')
   if (settings.channel >= capture.channelCount) {
     const message = `Channel ${settings.channel} does not exist: the file has ${capture.channelCount} channel(s), numbered from 0.`
     throw new ValidationError(message, { channel: message })
   }
-  const settingsKey = settingsToKey(settings)
-  if (await Analysis.findOne({ where: { captureId, settingsKey }, attributes: ['id'] })) return { captureId, settingsKey, status: 'exists' }
-  await queue.enqueue({ captureId, settingsKey })
-  await capture.update({ status: 'queued', statusMessage: 'Re-analysis waiting for a worker' })
-  await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.reanalysed', summary: `re-analysed ${capture.originalName} (${settings.bands} bands, 1/${settings.smoothing} octave smoothing)` })
-  return { captureId, settingsKey, status: 'queued' }
+  const { analysis, isNewRun } = await recordAnalysisRequest(captureId, settings)
+  if (isNewRun) {
+    await dispatchAnalysis(analysis, queue)
+    await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.reanalysed', summary: `re-analysed ${capture.originalName} (${settings.bands} bands, 1/${settings.smoothing} octave smoothing)` })
+  }
+  return { captureId, analysisId: analysis.id, settingsKey: analysis.settingsKey, status: analysis.status, isNewRun }
 }

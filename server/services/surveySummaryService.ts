@@ -61,7 +61,7 @@ function averageResponses(results: AnalysisResult[]): SurveySummaryDto['averaged
 export async function summariseSurvey(survey: Survey, bands: BandResolution): Promise<Omit<SurveySummaryDto, 'survey'>> {
   const captures = await Capture.findAll({ where: { surveyId: survey.id }, attributes: ['id'] })
   const analyses = await latestAnalysesByCapture(captures.map((c) => c.id), bands)
-  const results = [...analyses.values()].map((analysis) => analysis.result)
+  const results = [...analyses.values()].flatMap((analysis) => (analysis.result ? [analysis.result] : []))
   const averaged = spatialAverage(results.map((result) => result.bands), { bandsPerOctave: bands === 'octave' ? 1 : 3 })
   return {
     bandResolution: bands,

@@ -1,6 +1,8 @@
 import { Capture, Survey, type Room } from '../../server/models'
 import { storeUploadedFile } from '../../server/storage/storeUploadedFile'
 import { processAnalysisJob } from '../../worker/processAnalysisJob'
+import { recordAnalysisRequest } from '../../server/services/analysisJobsService'
+import { defaultSettingsOf } from '../../server/services/capturesService'
 import { synthesizeRoomImpulse } from '../../shared/acoustics/synthetic/synthesizeRoomImpulse'
 import { encodeWav } from '../../shared/acoustics/wav/encodeWav'
 import { writeFile, mkdtemp } from 'node:fs/promises'
@@ -30,9 +32,10 @@ export async function createAnalysedSurvey(room: Room, options: { name: string; 
       surveyId: survey.id, uploadedById: null, kind: 'impulse', receiverLabel: `Position ${position + 1}`,
       positionXM: null, positionYM: null, positionZM: null, sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256: null,
       originalName: `p${position}.wav`, sha256, byteSize: bytes.length, sampleRateHz: 48_000, bitDepth: 32, channelCount: 1,
-      durationS: impulse.length / 48_000, statusMessage: null,
+      durationS: impulse.length / 48_000,
     })
-    await processAnalysisJob({ data: { captureId: capture.id }, attemptsMade: 0, opts: { attempts: 1 }, updateProgress: async () => {} }, { storageDir: options.storageDir })
+    const { analysis } = await recordAnalysisRequest(capture.id, defaultSettingsOf(capture))
+    await processAnalysisJob({ data: { analysisId: analysis.id, captureId: capture.id }, attemptsMade: 0, opts: { attempts: 1 }, updateProgress: async () => {} }, { storageDir: options.storageDir })
   }
   return survey
 }

@@ -8,6 +8,7 @@ import { contentPath } from '../../server/storage/contentPath'
 import { processAnalysisJob } from '../../worker/processAnalysisJob'
 import { compareSurveys } from '../../server/services/comparisonService'
 import { startTestServices, type TestServices } from '../helpers/testServices'
+import { captureStatusOf } from '../helpers/captureStatus'
 
 let services: TestServices
 let storageDir: string
@@ -29,7 +30,7 @@ describe('seedDemoData', () => {
     const captures = await Capture.findAll()
     expect(captures).toHaveLength(6)
     for (const capture of captures) {
-      expect(capture.status).toBe('uploaded')
+      expect(await captureStatusOf(capture.id)).toBe('uploaded')
       expect((await stat(contentPath(storageDir, capture.sha256))).size).toBe(Number(capture.byteSize))
     }
   })
