@@ -15,6 +15,8 @@ export interface PostgresListenerOptions {
 
 export interface PostgresListener {
   isConnected: () => boolean
+  /** Resolves true once listening (at once when it is), false after `timeoutMs` without. */
+  whenConnected: (timeoutMs: number) => Promise<boolean>
   close: () => Promise<void>
 }
 
@@ -35,6 +37,7 @@ export function listenToPostgres(options: PostgresListenerOptions): PostgresList
   let attempt = 0
   let retryTimer: ReturnType<typeof setTimeout> | null = null
   let healthTimer: ReturnType<typeof setInterval> | null = null
+  const connectedWaiters = new Set<() => void>()
 
   function scheduleReconnect(): void {
     if (isClosed || retryTimer) return
@@ -84,11 +87,27 @@ export function listenToPostgres(options: PostgresListenerOptions): PostgresList
     healthTimer.unref()
     options.onConnected?.(hasConnected)
     hasConnected = true
+    for (const wake of connectedWaiters) wake()
+    connectedWaiters.clear()
   }
 
   void connect()
   return {
     isConnected: () => client !== null,
+    whenConnected(timeoutMs) {
+      if (client) return Promise.resolve(true)
+      return new Promise((resolve) => {
+        const wake = () => {
+          clearTimeout(timer)
+          resolve(true)
+        }
+        const timer = setTimeout(() => {
+          connectedWaiters.delete(wake)
+          resolve(false)
+        }, timeoutMs)
+        connectedWaiters.add(wake)
+      })
+    },
     async close() {
       isClosed = true
       if (retryTimer) clearTimeout(retryTimer)

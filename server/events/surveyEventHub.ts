@@ -27,6 +27,8 @@ export interface SurveyEventHubOptions {
   retryMs?: number
 }
 
+const LISTEN_WAIT_MS = 5000
+
 function overrideOf(notice: AnalysisChangeNotice): AnalysisStateRow {
   const date = (value: string | null) => (value === null ? null : new Date(value))
   return {
@@ -44,9 +46,10 @@ function overrideOf(notice: AnalysisChangeNotice): AnalysisStateRow {
 
 /**
  * Server-sent events per survey, fed by the database's change notifications (migration 0012), so
- * every server sees every worker's progress whatever machine it runs on. Events: `capture` (a
- * capture's new state, see SurveyCaptureEvent), `capture-deleted`, and `resync` after the
- * database connection came back (notifications may have been missed: read the list again).
+ * every server sees every worker's progress whatever machine it runs on. Events: `ready` (changes
+ * from now on will arrive; `isListening: false` if the database is away, then `resync` follows),
+ * `capture` (a capture's new state, see SurveyCaptureEvent), `capture-deleted`, and `resync`
+ * after the database connection came back (notifications may have been missed: read again).
  */
 export function createSurveyEventHub(options: SurveyEventHubOptions): SurveyEventHub {
   const channels = new Map<number, Channel>()
@@ -91,15 +94,17 @@ export function createSurveyEventHub(options: SurveyEventHubOptions): SurveyEven
     })
   }
 
-  function startListening(): void {
+  function startListening(): PostgresListener {
     listener ??= listenToPostgres({
       connectionString: options.databaseUrl,
       channel: ANALYSIS_CHANGES_CHANNEL,
       onNotice,
-      onConnected: (isReconnect) => {
-        if (isReconnect) for (const channel of channels.values()) channel.broadcast({}, 'resync')
+      // Streams open while the listener was away (or before it first connected) missed changes.
+      onConnected: () => {
+        for (const channel of channels.values()) channel.broadcast({}, 'resync')
       },
     })
+    return listener
   }
 
   function channelOf(surveyId: number): Channel {
@@ -113,7 +118,8 @@ export function createSurveyEventHub(options: SurveyEventHubOptions): SurveyEven
 
   return {
     async attach(req, res, surveyId, isStillAllowed) {
-      startListening()
+      // `ready` promises that changes from now on arrive; wait briefly for the listener to say so.
+      const isListening = await startListening().whenConnected(LISTEN_WAIT_MS)
       const session = await createSession(req, res, { keepAlive: options.keepAliveMs ?? 15_000, retry: options.retryMs ?? 3000 })
       const channel = channelOf(surveyId)
       channel.register(session)
@@ -130,7 +136,7 @@ export function createSurveyEventHub(options: SurveyEventHubOptions): SurveyEven
         openResponses.delete(res)
         if (channel.sessionCount === 0 && channels.get(surveyId) === channel) channels.delete(surveyId)
       })
-      session.push({ listening: listener?.isConnected() ?? false }, 'ready')
+      session.push({ isListening }, 'ready')
     },
     sessionCount: () => [...channels.values()].reduce((sum, channel) => sum + channel.sessionCount, 0),
     async close() {
