@@ -16,5 +16,5 @@ cleanup() { stop_services; rm -rf "$RINGDOWN_DATA_DIR"; }
 trap cleanup EXIT
 start_postgres >/dev/null
 start_redis >/dev/null
-echo "== pipeline (upload → queue → worker → PostgreSQL) =="
+echo "== pipeline: one server, 1/2/4 worker processes (upload → queue → worker → PostgreSQL) =="
 npx tsx bench/pipeline.ts
