@@ -29,10 +29,10 @@ export function useCaptureAnalysis(captureId: Ref<number>, options: { events?: S
     analysis.value = await capturesApi.getAnalysis(captureId.value, analysisId)
   }
 
-  /** Reads the capture and its analyses once: true while still waiting. */
-  async function refresh(): Promise<boolean> {
+  /** Reads the capture (unless a stream event brought it) and its analyses once: true while still waiting. */
+  async function refresh(fromEvent?: CaptureListItem): Promise<boolean> {
     const id = captureId.value
-    const [loaded, list] = await Promise.all([capturesApi.getCapture(id), capturesApi.listAnalyses(id).catch(() => [] as AnalysisListItemDto[])])
+    const [loaded, list] = await Promise.all([fromEvent ?? capturesApi.getCapture(id), capturesApi.listAnalyses(id).catch(() => [] as AnalysisListItemDto[])])
     if (id !== captureId.value) return false
     capture.value = loaded
     analyses.value = list
@@ -70,7 +70,7 @@ export function useCaptureAnalysis(captureId: Ref<number>, options: { events?: S
       onCapture: ({ capture: changed }) => {
         if (changed.id !== captureId.value) return
         capture.value = changed
-        void refresh().catch((caught: unknown) => (error.value = caught))
+        void refresh(changed).catch((caught: unknown) => (error.value = caught))
       },
       onCaptureDeleted: ({ captureId: deleted }) => {
         if (deleted === captureId.value) void load()
