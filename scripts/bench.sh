@@ -18,7 +18,7 @@ trap cleanup EXIT
 start_postgres >/dev/null
 start_redis >/dev/null
 start_s3 >/dev/null
-echo "== pipeline (upload → queue → worker → PostgreSQL) =="
+echo "== pipeline: one server, 1/2/4 worker processes (upload → queue → worker → PostgreSQL) =="
 npx tsx bench/pipeline.ts
 echo "== uploads (streamed into object storage) =="
 npx tsx bench/uploadMemory.ts

@@ -21,6 +21,8 @@ import { resultsRouter } from './routes/resultsRouter'
 import { roomModelRouter } from './routes/roomModelRouter'
 import { invitationsRouter } from './routes/invitationsRouter'
 import { reportInputsRouter } from './routes/reportInputsRouter'
+import { surveyEventsRouter } from './routes/surveyEventsRouter'
+import { createSurveyEventHub, type SurveyEventHub } from './events/surveyEventHub'
 import { createSmtpMailer, type Mailer } from './mail/mailer'
 import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
@@ -42,6 +44,8 @@ export interface AppDependencies {
   mailer?: Mailer
   /** Defaults to the bucket the S3_* settings name. */
   store?: ObjectStore
+  /** Live status streams; defaults to one fed by the database's change notifications. */
+  events?: SurveyEventHub
 }
 
 export const APP_VERSION = '0.1.0'
@@ -54,6 +58,7 @@ export interface RingdownApp {
   app: Express
   queue: AnalysisQueue
   store: ObjectStore
+  events: SurveyEventHub
   /** Closes what the app itself opened (the session store's pool, the queue). */
   close: () => Promise<void>
 }
@@ -63,9 +68,10 @@ export function createApp({
   sequelize,
   redis,
   clientDir = path.resolve('dist'),
-  queue = createAnalysisQueue(redis),
+  queue = createAnalysisQueue(redis, { prefix: config.QUEUE_PREFIX }),
   mailer = createSmtpMailer(config.SMTP_URL ?? `smtp://127.0.0.1:${config.FAKE_SMTP_PORT}`, config.MAIL_FROM),
   store = createObjectStore(config),
+  events = createSurveyEventHub({ databaseUrl: config.DATABASE_URL }),
 }: AppDependencies): RingdownApp {
   initModels(sequelize)
   const mail = { mailer, publicUrl: config.PUBLIC_URL ?? `http://${config.HOST}:${config.PORT}` }
@@ -130,6 +136,7 @@ export function createApp({
   app.use('/api', roomModelRouter())
   app.use('/api', invitationsRouter(mail))
   app.use('/api', reportInputsRouter({ queue }))
+  app.use('/api', surveyEventsRouter(events))
   if (!config.SMTP_URL && isLoopback(config.HOST)) {
     // The development mailbox: only while mail goes to the local fake inbox, the server listens on
     // loopback and the request comes from this machine (it shows reset links, so never further).
@@ -146,5 +153,5 @@ export function createApp({
     app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
   }
   app.use(errorHandler)
-  return { app, queue, store, close: async () => { mailer.close(); await Promise.allSettled([sessionPool.end(), queue.close()]) } }
+  return { app, queue, store, events, close: async () => { mailer.close(); await Promise.allSettled([events.close(), sessionPool.end(), queue.close()]) } }
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { DEFAULT_QUEUE_PREFIX } from '../shared/jobs/analysisJob'
 
 /** Environment validated once at start-up; nothing else reads process.env. */
 const envSchema = z.object({
@@ -38,6 +39,10 @@ const envSchema = z.object({
   S3_REGION: z.string().min(1).default('us-east-1'),
   /** Path-style addressing (http://host/bucket/key); default on when S3_ENDPOINT is set, as compatible servers need. */
   S3_FORCE_PATH_STYLE: z.enum(['0', '1']).optional(),
+  /** BullMQ key prefix; keep the braces (a Redis Cluster hash tag) when changing it. */
+  QUEUE_PREFIX: z.string().min(1).default(DEFAULT_QUEUE_PREFIX),
+  /** Jobs one worker process runs at once (the analysis is CPU-bound: scale with processes). */
+  WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(1),
 })
 
 export type AppConfig = z.infer<typeof envSchema>
@@ -47,6 +52,36 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!parsed.success) {
     const lines = parsed.error.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}`)
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`)
+  }
+  return parsed.data
+}
+
+/**
+ * What a worker needs, and nothing more: the database, Redis, the bucket and its own
+ * tuning, so a worker runs on any machine with only these set (no session secret, no mail).
+ */
+const workerEnvSchema = envSchema.pick({
+  NODE_ENV: true,
+  DATABASE_URL: true,
+  REDIS_URL: true,
+  S3_ENDPOINT: true,
+  S3_BUCKET: true,
+  S3_REGION: true,
+  S3_FORCE_PATH_STYLE: true,
+  QUEUE_PREFIX: true,
+  WORKER_CONCURRENCY: true,
+  WORKER_LOCK_DURATION_MS: true,
+  WORKER_STALLED_INTERVAL_MS: true,
+  LOG_LEVEL: true,
+})
+
+export type WorkerConfig = z.infer<typeof workerEnvSchema>
+
+export function loadWorkerConfig(env: NodeJS.ProcessEnv = process.env): WorkerConfig {
+  const parsed = workerEnvSchema.safeParse(env)
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}`)
+    throw new Error(`Invalid worker configuration:\n${lines.join('\n')}`)
   }
   return parsed.data
 }

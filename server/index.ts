@@ -3,7 +3,7 @@ import { loadConfig } from './config'
 import { createSequelize } from './db/createSequelize'
 import { createApp } from './app'
 import { logger } from './logger'
-import { requeueUploadedCaptures } from './services/capturesService'
+import { superviseAnalysisQueue } from './services/analysisJobsService'
 import { startFakeSmtpInbox } from './mail/fakeSmtpInbox'
 import { startStorageHousekeeping } from './storage/startStorageHousekeeping'
 
@@ -20,10 +20,11 @@ const { app, queue, store, close } = createApp({ config, sequelize, redis })
 // removed now and every few minutes.
 const storageHousekeeping = startStorageHousekeeping(store)
 
-// Captures accepted while Redis was down stay `uploaded`; queue them once it answers again.
+// Analyses accepted while Redis was down wait without a job; queue them once it answers again, and
+// settle rows whose job BullMQ lost (see superviseAnalysisQueue).
 const REQUEUE_INTERVAL_MS = 10_000
 function requeuePass() {
-  requeueUploadedCaptures(queue).catch((error: unknown) => logger.warn({ err: error }, 'requeue pass failed'))
+  superviseAnalysisQueue(queue).catch((error: unknown) => logger.warn({ err: error }, 'requeue pass failed'))
 }
 requeuePass()
 const requeueTimer = setInterval(requeuePass, REQUEUE_INTERVAL_MS)

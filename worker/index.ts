@@ -1,6 +1,6 @@
 import { Worker } from 'bullmq'
 import { Redis } from 'ioredis'
-import { loadConfig } from '../server/config'
+import { loadWorkerConfig } from '../server/config'
 import { createSequelize } from '../server/db/createSequelize'
 import { initModels } from '../server/models'
 import { createObjectStore } from '../server/storage/createObjectStore'
@@ -11,7 +11,7 @@ import { processAnalysisJob } from './processAnalysisJob'
 // `npm run worker`: consumes the analysis queue. Safe to run many times, on any machine, against
 // one Redis, one PostgreSQL and one bucket (DATABASE_URL, REDIS_URL, S3_*); it reads no local
 // files. On SIGTERM it finishes the job in hand, then exits.
-const config = loadConfig()
+const config = loadWorkerConfig()
 const sequelize = createSequelize(config.DATABASE_URL)
 initModels(sequelize)
 const connection = new Redis(config.REDIS_URL, { maxRetriesPerRequest: null })
@@ -19,12 +19,13 @@ const store = createObjectStore(config)
 
 const worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store }), {
   connection,
-  concurrency: 1,
+  prefix: config.QUEUE_PREFIX,
+  concurrency: config.WORKER_CONCURRENCY,
   lockDuration: config.WORKER_LOCK_DURATION_MS,
   stalledInterval: config.WORKER_STALLED_INTERVAL_MS,
 })
-worker.on('ready', () => logger.info({ queue: ANALYSIS_QUEUE_NAME }, 'worker ready'))
-worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data.captureId }, 'analysis done'))
+worker.on('ready', () => logger.info({ queue: ANALYSIS_QUEUE_NAME, prefix: config.QUEUE_PREFIX }, 'worker ready'))
+worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data.captureId, analysisId: job.data.analysisId }, 'analysis done'))
 worker.on('failed', (job, error) => logger.warn({ jobId: job?.id, err: error }, 'analysis failed'))
 worker.on('error', (error) => logger.error({ err: error }, 'worker error'))
 

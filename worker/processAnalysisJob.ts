@@ -1,12 +1,13 @@
 import { UnrecoverableError, type Job } from 'bullmq'
-import { Analysis, Capture } from '../server/models'
+import { Capture } from '../server/models'
 import { ObjectNotFoundError, type ObjectStore } from '../server/storage/createObjectStore'
 import { readContent } from '../server/storage/readContent'
 import { decodeWav } from '../shared/acoustics/wav/decodeWav'
 import { analyseCapture } from '../shared/acoustics/analyseCapture'
 import { DspInputError } from '../shared/acoustics/errors'
 import type { AnalysisJobPayload } from '../shared/jobs/analysisJob'
-import { keyToSettings, settingsToKey } from '../shared/jobs/analysisSettingsKey'
+import { analysisIdOf, claimAnalysis, recordFailure, recordResult, recordStage } from './analysisRecord'
+import { logger } from '../server/logger'
 
 export interface ProcessorContext {
   /** The bucket the server stores uploads in: the worker reads nothing from a local disk. */
@@ -25,23 +26,31 @@ async function readStored(store: ObjectStore, sha256: string): Promise<Uint8Arra
   }
 }
 
+async function captureOf(captureId: number): Promise<Capture> {
+  const capture = await Capture.findByPk(captureId)
+  if (!capture) throw new UnrecoverableError(`Capture ${captureId} no longer exists.`)
+  return capture
+}
+
 /**
- * Loads the capture's file, decodes it, runs the acoustics pipeline and stores the result once per
- * (capture, settings). Bad audio fails at once (no retry); anything else is retried by BullMQ and
- * marks the capture failed only after the last attempt.
+ * Runs the analysis its job names: claims the analysis row, loads the capture's file, decodes it,
+ * runs the acoustics pipeline and stores the result in that row. Bad audio fails at once (no
+ * retry); anything else is retried by BullMQ and marks the row failed only after the last attempt.
+ * The capture row is never written: its state is derived from its analyses.
  */
 export async function processAnalysisJob(job: ProgressJob, context: ProcessorContext): Promise<{ analysisId: number }> {
-  const capture = await Capture.findByPk(job.data.captureId)
-  if (!capture) throw new UnrecoverableError(`Capture ${job.data.captureId} no longer exists.`)
-  const settings = keyToSettings(job.data.settingsKey)
+  const analysisId = await analysisIdOf(job.data, async () => (await captureOf(job.data.captureId)).channel)
+  const analysis = await claimAnalysis(analysisId)
+  if (!analysis) return { analysisId } // already done (a repeated delivery), or the capture was deleted
   try {
-    await capture.update({ status: 'analysing', statusMessage: 'Reading the file' })
+    const capture = await captureOf(analysis.captureId)
+    const settings = analysis.settings
     await job.updateProgress({ stage: 'decoding', percent: 10 })
     const decoded = decodeWav(await readStored(context.store, capture.sha256), { channel: settings.channel })
     const referenceSweep = capture.referenceSha256
       ? decodeWav(await readStored(context.store, capture.referenceSha256), { channel: 0 }).samples
       : undefined
-    await capture.update({ statusMessage: 'Analysing bands' })
+    await recordStage(analysis, 'Analysing bands')
     await job.updateProgress({ stage: 'analysing', percent: 30 })
     const result = analyseCapture(decoded.samples, {
       sampleRateHz: decoded.sampleRateHz,
@@ -54,20 +63,16 @@ export async function processAnalysisJob(job: ProgressJob, context: ProcessorCon
     })
     result.warnings.push(...decoded.warnings)
     await job.updateProgress({ stage: 'storing', percent: 90 })
-    const settingsKey = settingsToKey(settings)
-    const [analysis] = await Analysis.upsert(
-      { captureId: capture.id, settingsKey, engineVersion: result.engineVersion, result },
-      { conflictFields: ['capture_id', 'settings_key'] as never },
-    )
-    await capture.update({ status: 'done', statusMessage: null })
+    await recordResult(analysis, result)
     await job.updateProgress({ stage: 'done', percent: 100 })
     return { analysisId: analysis.id }
   } catch (error) {
     const isBadInput = error instanceof DspInputError || error instanceof UnrecoverableError
     const isLastAttempt = job.attemptsMade + 1 >= (job.opts.attempts ?? 1)
-    if (isBadInput || isLastAttempt) {
-      await capture.update({ status: 'failed', statusMessage: (error as Error).message })
-    }
+    // When even this write fails (database away), the server's queue pass settles the row later.
+    await recordFailure(analysis, (error as Error).message, { isFinal: isBadInput || isLastAttempt }).catch((writeError: unknown) =>
+      logger.warn({ err: writeError, analysisId }, 'could not record the failure'),
+    )
     if (error instanceof DspInputError) throw new UnrecoverableError(error.message)
     throw error
   }

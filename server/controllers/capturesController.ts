@@ -4,7 +4,7 @@ import * as captures from '../services/capturesService'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { ObjectStore } from '../storage/createObjectStore'
 import type { IncomingUpload } from '../storage/incomingUploadStorage'
-import type { CreateCaptureFields } from '../../shared/api/captures'
+import type { CreateCaptureFields, ListCapturesQuery } from '../../shared/api/captures'
 
 type SurveyParams = { surveyId: number }
 type CaptureParams = { captureId: number }
@@ -32,7 +32,8 @@ export function create(context: { store: ObjectStore; queue: AnalysisQueue }) {
 }
 
 export async function list(req: Request, res: Response) {
-  res.json(await captures.listCaptures(currentUserId(req), (req.params as unknown as SurveyParams).surveyId))
+  const { surveyId } = req.params as unknown as SurveyParams
+  res.json(await captures.listCaptures(currentUserId(req), surveyId, req.query as unknown as ListCapturesQuery))
 }
 
 export async function show(req: Request, res: Response) {

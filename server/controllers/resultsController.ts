@@ -60,7 +60,7 @@ export function reanalyse(queue: AnalysisQueue) {
   return async (req: Request, res: Response) => {
     const { captureId } = req.params as unknown as { captureId: number }
     const outcome = await requestReanalysis(currentUserId(req), captureId, req.body as AnalysisSettings, queue)
-    res.status(outcome.status === 'queued' ? 202 : 200).json(outcome)
+    res.status(outcome.status === 'done' ? 200 : 202).json(outcome)
   }
 }
 

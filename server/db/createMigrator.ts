@@ -5,6 +5,9 @@ import * as analyses from '../migrations/0002-analyses'
 import * as roomModels from '../migrations/0003-room-models'
 import * as invitationsSharesActivity from '../migrations/0004-invitations-shares-activity'
 import * as contentReferences from '../migrations/0005-content-references'
+import * as analysisJobRecord from '../migrations/0010-analysis-job-record'
+import * as analysisHeadlineColumns from '../migrations/0011-analysis-headline-columns'
+import * as analysisChangeNotifications from '../migrations/0012-analysis-change-notifications'
 import * as customTargetsAndProfiles from '../migrations/0030-custom-targets-and-profiles'
 import * as captureInclusionAndPin from '../migrations/0031-capture-inclusion-and-pin'
 import * as reportRevisions from '../migrations/0032-report-revisions'
@@ -19,6 +22,9 @@ const MIGRATIONS = [
   { name: '0003-room-models', module: roomModels },
   { name: '0004-invitations-shares-activity', module: invitationsSharesActivity },
   { name: '0005-content-references', module: contentReferences },
+  { name: '0010-analysis-job-record', module: analysisJobRecord },
+  { name: '0011-analysis-headline-columns', module: analysisHeadlineColumns },
+  { name: '0012-analysis-change-notifications', module: analysisChangeNotifications },
   { name: '0030-custom-targets-and-profiles', module: customTargetsAndProfiles },
   { name: '0031-capture-inclusion-and-pin', module: captureInclusionAndPin },
   { name: '0032-report-revisions', module: reportRevisions },

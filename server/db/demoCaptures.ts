@@ -2,6 +2,8 @@ import type { Transaction } from 'sequelize'
 import { Capture, type Survey } from '../models'
 import type { ObjectStore } from '../storage/createObjectStore'
 import { storeContentBytes } from '../storage/storeContentBytes'
+import { recordAnalysisRequest } from '../services/analysisJobsService'
+import { defaultSettingsOf } from '../services/capturesService'
 import { synthesizeRoomImpulse } from '../../shared/acoustics/synthetic/synthesizeRoomImpulse'
 import { encodeWav } from '../../shared/acoustics/wav/encodeWav'
 
@@ -24,7 +26,7 @@ const POSITIONS = [
 
 const SAMPLE_RATE_HZ = 48_000
 
-/** Writes one synthetic capture per position into storage and the database, status `uploaded`. */
+/** Writes one synthetic capture per position into storage and the database, a queued analysis (`uploaded`). */
 export async function createDemoCaptures(survey: Survey, condition: keyof typeof DEMO_CONDITIONS, store: ObjectStore, transaction: Transaction): Promise<void> {
   for (const [index, position] of POSITIONS.entries()) {
     const { t60S, sideWallReflectionDb } = DEMO_CONDITIONS[condition]
@@ -39,7 +41,7 @@ export async function createDemoCaptures(survey: Survey, condition: keyof typeof
     })
     const bytes = encodeWav(impulse, { sampleRateHz: SAMPLE_RATE_HZ, encoding: 'pcm24' })
     const sha256 = await storeContentBytes(store, bytes, transaction)
-    await Capture.create(
+    const capture = await Capture.create(
       {
         surveyId: survey.id,
         uploadedById: null,
@@ -60,10 +62,10 @@ export async function createDemoCaptures(survey: Survey, condition: keyof typeof
         bitDepth: 24,
         channelCount: 1,
         durationS: impulse.length / SAMPLE_RATE_HZ,
-        status: 'uploaded',
-        statusMessage: 'Waiting for the queue',
       },
       { transaction },
     )
+    // Its job record, not yet in the queue: the server's queue pass sends it once it runs.
+    await recordAnalysisRequest(capture.id, defaultSettingsOf(capture), { transaction })
   }
 }

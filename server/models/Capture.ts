@@ -1,8 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
-import { CAPTURE_STATUSES, type CaptureStatus } from '../../shared/jobs/analysisJob'
 import type { CaptureKind } from '../../shared/types/analysis'
 
-/** One uploaded or recorded file in a survey, with its file facts and analysis status. */
+/** One uploaded or recorded file in a survey, with its file facts; its state is derived from its analyses. */
 export class Capture extends Model<InferAttributes<Capture>, InferCreationAttributes<Capture>> {
   declare id: CreationOptional<number>
   declare surveyId: number
@@ -25,8 +24,6 @@ export class Capture extends Model<InferAttributes<Capture>, InferCreationAttrib
   declare bitDepth: number
   declare channelCount: number
   declare durationS: number
-  declare status: CreationOptional<CaptureStatus>
-  declare statusMessage: string | null
   declare excludedAt: CreationOptional<Date | null>
   declare exclusionReason: CreationOptional<string | null>
   declare excludedById: CreationOptional<number | null>
@@ -58,8 +55,6 @@ export class Capture extends Model<InferAttributes<Capture>, InferCreationAttrib
         bitDepth: { type: DataTypes.INTEGER, allowNull: false },
         channelCount: { type: DataTypes.INTEGER, allowNull: false },
         durationS: { type: DataTypes.DOUBLE, allowNull: false },
-        status: { type: DataTypes.ENUM(...CAPTURE_STATUSES), allowNull: false, defaultValue: 'uploaded' },
-        statusMessage: { type: DataTypes.TEXT, allowNull: true },
         excludedAt: { type: DataTypes.DATE, allowNull: true },
         exclusionReason: { type: DataTypes.STRING(300), allowNull: true },
         excludedById: { type: DataTypes.INTEGER, allowNull: true },

@@ -5,7 +5,7 @@ import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { captureUpload } from '../middleware/upload'
 import { idParam } from '../../shared/api/common'
-import { createCaptureFieldsSchema } from '../../shared/api/captures'
+import { createCaptureFieldsSchema, listCapturesQuerySchema } from '../../shared/api/captures'
 import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { ObjectStore } from '../storage/createObjectStore'
 import type { IncomingUpload } from '../storage/incomingUploadStorage'
@@ -28,7 +28,7 @@ function validateFieldsOrDiscard(store: ObjectStore): RequestHandler {
 
 export function capturesRouter(context: { store: ObjectStore; uploadLimitMb: number; queue: AnalysisQueue }) {
   const router = Router()
-  router.get('/surveys/:surveyId/captures', requireAuth, validate({ params: surveyParams }), captures.list)
+  router.get('/surveys/:surveyId/captures', requireAuth, validate({ params: surveyParams, query: listCapturesQuerySchema }), captures.list)
   router.post(
     '/surveys/:surveyId/captures',
     requireAuth,

@@ -11,19 +11,21 @@ import { findChunkStart } from '../../shared/acoustics/wav/findChunkStart'
 import { readWavFacts } from '../../shared/acoustics/wav/readWavFacts'
 import { checkReferenceSweep } from '../../shared/acoustics/sweep/checkReferenceSweep'
 import { DspInputError } from '../../shared/acoustics/errors'
+import { literal, Op, type OrderItem } from 'sequelize'
 import type { AnalysisQueue } from '../queue/analysisQueue'
-import type { AnalysisDto, CaptureDto, CaptureHeadline, CreateCaptureFields } from '../../shared/api/captures'
-import type { AnalysisResult } from '../../shared/types/analysis'
-import { DEFAULT_ANALYSIS_SETTINGS, settingsToKey } from '../../shared/jobs/analysisSettingsKey'
+import type { AnalysisDto, CaptureDto, CapturePageDto, CaptureSortKey, CreateCaptureFields, ListCapturesQuery } from '../../shared/api/captures'
+import type { AnalysisSettings } from '../../shared/types/analysis'
+import { DEFAULT_ANALYSIS_SETTINGS, keyToSettings } from '../../shared/jobs/analysisSettingsKey'
 import { countingAnalyses, surveySettingsKeyFor, surveyAnalysisSettings } from './countingAnalyses'
 import { noteReportChange } from './reportDrafts'
-import { logger } from '../logger'
 import { recordActivity } from './activityService'
+import { dispatchAnalysis, recordAnalysisRequest } from './analysisJobsService'
+import { captureViewOf, loadCaptureViews, toStateRow, type AnalysisStateRow, type CaptureView } from './captureStates'
 
 /** An uploaded file as the upload middleware hands it over: in a temporary object, hashed. */
 export type UploadedFile = IncomingUpload
 
-export function toCaptureDto(capture: Capture): CaptureDto {
+export function toCaptureDto(capture: Capture, view: CaptureView): CaptureDto {
   return {
     id: capture.id,
     surveyId: capture.surveyId,
@@ -46,12 +48,15 @@ export function toCaptureDto(capture: Capture): CaptureDto {
     bitDepth: capture.bitDepth,
     channelCount: capture.channelCount,
     durationS: capture.durationS,
-    status: capture.status,
-    statusMessage: capture.statusMessage,
+    status: view.state.status,
+    statusMessage: view.state.statusMessage,
     isExcluded: capture.excludedAt !== null,
     exclusionReason: capture.exclusionReason,
     excludedAt: capture.excludedAt?.toISOString() ?? null,
     pinnedAnalysisId: capture.pinnedAnalysisId,
+    countingAnalysisId: view.countingAnalysisId,
+    shownAnalysisId: view.state.shownAnalysisId,
+    headline: view.headline,
     createdAt: capture.createdAt.toISOString(),
     updatedAt: capture.updatedAt.toISOString(),
   }
@@ -98,10 +103,11 @@ export async function assertMayAddCapture(userId: number, surveyId: number): Pro
 
 /**
  * Validates the uploaded WAV(s) (already streamed to temporary objects), stores them
- * content-addressed, writes the capture row and enqueues its analysis. On any failure nothing is
- * left behind: temporary objects are removed, and newly stored content is released again when its
- * row could not be written. When Redis is down the capture stays `uploaded` and
- * {@link requeueUploadedCaptures} queues it once Redis is back.
+ * content-addressed, writes the capture row with the job record of its first analysis (the
+ * survey's settings) and enqueues it. On any failure nothing is left behind: temporary objects are
+ * removed, and newly stored content is released again when its row could not be written. When
+ * Redis is down the capture reads `uploaded` and the server's queue pass (superviseAnalysisQueue)
+ * queues it once Redis is back.
  */
 export async function createCapture(
   userId: number,
@@ -131,8 +137,9 @@ export async function createCapture(
     }
     const file = files.file
     const reference = files.reference
-    const capture = await commitUploads(context.store, reference ? [file, reference] : [file], (transaction) =>
-      Capture.create(
+    // The capture and its first job record are written together: no capture is ever without one.
+    const { capture, analysis } = await commitUploads(context.store, reference ? [file, reference] : [file], async (transaction) => {
+      const created = await Capture.create(
         {
           ...fields,
           surveyId,
@@ -145,58 +152,91 @@ export async function createCapture(
           bitDepth: facts.bitDepth,
           channelCount: facts.channelCount,
           durationS: facts.durationS,
-          status: 'uploaded',
-          statusMessage: 'Waiting for the queue',
         },
         { transaction },
-      ),
-    )
-    await enqueueCapture(capture, context.queue, surveySettingsKeyFor(capture, surveyAnalysisSettings(survey)))
+      )
+      const request = await recordAnalysisRequest(created.id, firstSettingsOf(created, survey), { transaction })
+      return { capture: created, analysis: request.analysis }
+    })
+    await dispatchAnalysis(analysis, context.queue)
     await noteReportChange(room.id, surveyId, `New capture ${capture.receiverLabel || capture.originalName} uploaded`)
     await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'capture.uploaded', summary: `uploaded ${capture.originalName} (${capture.receiverLabel || 'no position label'})` })
-    return toCaptureDto(capture)
+    return toCaptureDto(capture, captureViewOf([toStateRow(analysis)]))
   } catch (error) {
     await discardUploads(context.store, [files.file, files.reference])
     throw error
   }
 }
 
-/** Enqueues the default analysis; a Redis outage leaves the capture `uploaded` for the requeue loop. */
-export async function enqueueCapture(capture: Capture, queue: AnalysisQueue, settingsKey = settingsToKey({ ...DEFAULT_ANALYSIS_SETTINGS, channel: capture.channel })): Promise<void> {
-  try {
-    await queue.enqueue({ captureId: capture.id, settingsKey })
-    await capture.update({ status: 'queued', statusMessage: 'Waiting for a worker' })
-  } catch (error) {
-    logger.warn({ err: error, captureId: capture.id }, 'could not enqueue; will retry')
+/** The settings of a capture's first analysis: the engine's defaults on the capture's channel. */
+export function defaultSettingsOf(capture: Pick<Capture, 'channel'>): AnalysisSettings {
+  return { ...DEFAULT_ANALYSIS_SETTINGS, channel: capture.channel }
+}
+
+/** The settings a new capture of a survey is first analysed with: the survey's, on its channel. */
+function firstSettingsOf(capture: Pick<Capture, 'channel'>, survey: Survey): AnalysisSettings {
+  return keyToSettings(surveySettingsKeyFor(capture, surveyAnalysisSettings(survey)))
+}
+
+/**
+ * Views of some captures of one survey: derived state, and the analysis shown — the one that
+ * counts (countingAnalyses: pinned, or the default rule) when it exists, else the newest done.
+ */
+async function captureViews(captures: readonly Capture[], survey: Survey, override?: AnalysisStateRow): Promise<Map<number, CaptureView>> {
+  const counting = await countingAnalyses(captures, survey, undefined, { withResult: false })
+  return loadCaptureViews(captures.map((capture) => ({ id: capture.id, countingAnalysisId: counting.get(capture.id)?.id ?? null })), override)
+}
+
+/**
+ * ORDER BY value of a headline column of the analysis a capture shows, close to what captureViews
+ * picks: the pinned analysis first, else the newest done one (the default rule's choice among
+ * several settings is not repeated in SQL; the survey's own settings usually have one row).
+ */
+const shownHeadline = (column: string) =>
+  literal(`(SELECT a.${column} FROM analyses a WHERE a.capture_id = "Capture"."id" AND a.status = 'done' ORDER BY (a.id = "Capture"."pinned_analysis_id") DESC NULLS LAST, a.finished_at DESC NULLS LAST, a.id DESC LIMIT 1)`)
+
+const HEADLINE_COLUMNS = { T30: 'headline_t30_s', EDT: 'headline_edt_s', C80: 'headline_c80_db' } as const
+
+function orderOf(sort: CaptureSortKey, order: 'asc' | 'desc'): OrderItem[] {
+  const direction = order === 'asc' ? 'ASC' : 'DESC'
+  const byId: OrderItem = ['id', 'ASC']
+  switch (sort) {
+    case 'uploaded':
+      return [['id', direction]]
+    case 'receiver':
+      return [['receiverLabel', direction], byId]
+    case 'source':
+      return [['sourceLabel', direction], byId]
+    case 'kind':
+      return [['kind', direction], byId]
+    default:
+      return [[shownHeadline(HEADLINE_COLUMNS[sort]), `${direction} NULLS LAST`], byId]
   }
 }
 
-/** Queues every capture still `uploaded` (e.g. accepted while Redis was down). Returns how many. */
-export async function requeueUploadedCaptures(queue: AnalysisQueue): Promise<number> {
-  const waiting = await Capture.findAll({ where: { status: 'uploaded' }, limit: 100, order: [['id', 'ASC']] })
-  for (const capture of waiting) await enqueueCapture(capture, queue)
-  return waiting.filter((c) => c.status === 'queued').length
-}
+const HAS_DONE_ANALYSIS = `EXISTS (SELECT 1 FROM analyses a WHERE a.capture_id = "Capture"."id" AND a.status = 'done')`
 
-/** Mid-band (500 Hz and 1 kHz octaves, or the thirds 400 Hz–1.25 kHz) mean of a parameter. */
-function midBand(result: AnalysisResult, parameter: 'T30' | 'T20' | 'EDT' | 'C80'): number | null {
-  const values = result.bands
-    .filter((band) => band.centreHz >= 355 && band.centreHz <= 1413)
-    .map((band) => band[parameter])
-    .filter((value): value is number => value !== null)
-  return values.length === 0 ? null : values.reduce((sum, value) => sum + value, 0) / values.length
-}
-
-export function headlineOf(result: AnalysisResult | undefined): CaptureHeadline | null {
-  if (!result) return null
-  return { T30S: midBand(result, 'T30'), T20S: midBand(result, 'T20'), EDTS: midBand(result, 'EDT'), C80Db: midBand(result, 'C80') }
-}
-
-export async function listCaptures(userId: number, surveyId: number): Promise<CaptureDto[]> {
+/**
+ * One page of a survey's captures, ordered on the server, each with its derived state and the
+ * headline figures of the analysis it shows, read from columns: no analysis result is loaded.
+ */
+export async function listCaptures(userId: number, surveyId: number, query: ListCapturesQuery): Promise<CapturePageDto> {
   const { survey } = await requireSurveyAccess(userId, surveyId, 'room:read')
-  const captures = await Capture.findAll({ where: { surveyId }, order: [['id', 'ASC']] })
-  const analyses = await countingAnalyses(captures, survey)
-  return captures.map((capture) => ({ ...toCaptureDto(capture), countingAnalysisId: analyses.get(capture.id)?.id ?? null, headline: headlineOf(analyses.get(capture.id)?.result) }))
+  const filters = query.analysed === undefined ? [] : [literal(query.analysed ? HAS_DONE_ANALYSIS : `NOT ${HAS_DONE_ANALYSIS}`)]
+  const { rows, count } = await Capture.findAndCountAll({
+    where: { surveyId, [Op.and]: filters },
+    order: orderOf(query.sort, query.order),
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  })
+  const views = await captureViews(rows, survey)
+  return { items: rows.map((capture) => toCaptureDto(capture, views.get(capture.id)!)), total: count, page: query.page, pageSize: query.pageSize }
+}
+
+/** One capture as the list and the live stream show it. */
+export async function describeCapture(capture: Capture, override?: AnalysisStateRow): Promise<CaptureDto> {
+  const views = await captureViews([capture], await surveyOf(capture), override)
+  return toCaptureDto(capture, views.get(capture.id)!)
 }
 
 /** Loads a capture the caller may read; a capture in a room they cannot see is a 404. */
@@ -215,8 +255,7 @@ export async function requireCaptureAccess(userId: number, captureId: number) {
 
 export async function getCapture(userId: number, captureId: number): Promise<CaptureDto> {
   const { capture } = await requireCaptureAccess(userId, captureId)
-  const analysis = (await countingAnalyses([capture], await surveyOf(capture))).get(capture.id)
-  return { ...toCaptureDto(capture), countingAnalysisId: analysis?.id ?? null, headline: headlineOf(analysis?.result) }
+  return describeCapture(capture)
 }
 
 /**
@@ -240,23 +279,24 @@ async function surveyOf(capture: Capture): Promise<Survey> {
 
 /**
  * The analysis a capture page opens on and its exports use: the one asked for by id, else the one
- * that counts (pinned, or the default rule), else — before any analysis with the survey's
- * settings exists — the newest, marked as not counting.
+ * the capture shows (the counting one — pinned, or the default rule — else its newest done one);
+ * only finished analyses.
  */
 export async function getLatestAnalysis(userId: number, captureId: number, analysisId?: number): Promise<AnalysisDto> {
   const { capture } = await requireCaptureAccess(userId, captureId)
-  const counting = (await countingAnalyses([capture], await surveyOf(capture), undefined, { withResult: false })).get(capture.id)
-  const wantedId = analysisId ?? counting?.id
-  const analysis = await Analysis.findOne({ where: { captureId, ...(wantedId ? { id: wantedId } : {}) }, order: [['updatedAt', 'DESC']] })
-  if (!analysis) throw new NotFoundError('An analysis of that capture', 'analysis-not-ready')
+  const view = (await captureViews([capture], await surveyOf(capture))).get(capture.id)!
+  const wantedId = analysisId ?? view.state.shownAnalysisId
+  const analysis = wantedId === null ? null : await Analysis.findOne({ where: { id: wantedId, captureId, status: 'done' } })
+  if (!analysis || !analysis.result) throw new NotFoundError('An analysis of that capture', 'analysis-not-ready')
   return {
     id: analysis.id,
     captureId,
     settingsKey: analysis.settingsKey,
-    engineVersion: analysis.engineVersion,
+    engineVersion: analysis.engineVersion ?? analysis.result.engineVersion,
     createdAt: analysis.createdAt.toISOString(),
-    isCounting: analysis.id === counting?.id,
+    isCounting: analysis.id === view.countingAnalysisId,
     isPinned: analysis.id === capture.pinnedAnalysisId,
+    finishedAt: analysis.finishedAt?.toISOString() ?? null,
     result: analysis.result,
   }
 }

@@ -33,9 +33,9 @@ export async function countingAnalyses(
   if (captures.length === 0) return new Map()
   const settings = surveyAnalysisSettings(survey)
   const wantedBands = bands ?? settings.bands
-  // At the merge with the job-record analyses, add `status: 'done'` here: only finished analyses count.
+  // Only finished analyses count (an analysis row is also the job record of a queued or failed run).
   const candidates = await Analysis.findAll({
-    where: { captureId: { [Op.in]: captures.map((c) => c.id) } },
+    where: { captureId: { [Op.in]: captures.map((c) => c.id) }, status: 'done' },
     attributes: ['id', 'captureId', 'settingsKey', 'createdAt'],
     order: [['createdAt', 'ASC'], ['id', 'ASC']],
   })

@@ -24,7 +24,7 @@ export async function analyseWholeSurvey(userId: number, surveyId: number, setti
   let queued = 0
   for (const capture of captures) {
     const outcome = await requestReanalysis(userId, capture.id, { ...settings, channel: capture.channel }, queue, { quiet: true })
-    if (outcome.status === 'queued') queued++
+    if (outcome.isNewRun) queued++
   }
   const what = describeAnalysisSettings(settings)
   await recordActivity({ workspaceId: room.workspaceId, roomId: room.id, userId, action: 'survey.analysed', summary: `analysed the whole survey “${survey.name}” with ${what} (${queued} of ${captures.length} captures queued)` })
@@ -36,15 +36,16 @@ export async function analyseWholeSurvey(userId: number, surveyId: number, setti
 export async function surveyAnalysisProgress(userId: number, surveyId: number): Promise<SurveyAnalysisProgressDto> {
   const { survey } = await requireSurveyAccess(userId, surveyId, 'room:read')
   const settings = surveyAnalysisSettings(survey)
-  const captures = await Capture.findAll({ where: { surveyId }, attributes: ['id', 'channel', 'status'] })
-  // At the merge with the job-record analyses, count only rows with status 'done' here as well.
-  const analysed = await Analysis.findAll({ where: { captureId: captures.map((c) => c.id) }, attributes: ['captureId', 'settingsKey'] })
+  const captures = await Capture.findAll({ where: { surveyId }, attributes: ['id', 'channel'] })
+  // The job record of each capture's analysis with the survey's settings tells done, failed or pending.
+  const rows = await Analysis.findAll({ where: { captureId: captures.map((c) => c.id) }, attributes: ['captureId', 'settingsKey', 'status'] })
   let done = 0
   let failed = 0
   for (const capture of captures) {
     const key = surveySettingsKeyFor(capture, settings)
-    if (analysed.some((a) => a.captureId === capture.id && a.settingsKey === key)) done++
-    else if (capture.status === 'failed') failed++
+    const row = rows.find((a) => a.captureId === capture.id && a.settingsKey === key)
+    if (row?.status === 'done') done++
+    else if (row?.status === 'failed') failed++
   }
   return { settings, total: captures.length, done, failed, pending: captures.length - done - failed }
 }

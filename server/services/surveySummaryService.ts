@@ -6,6 +6,8 @@ import { countingAnalyses, surveyAnalysisSettings } from './countingAnalyses'
 import { keyToSettings } from '../../shared/jobs/analysisSettingsKey'
 import { getSurvey, requireSurveyAccess } from './surveysService'
 import { averageDecayCurves } from './averageDecayCurves'
+import { loadCaptureViews } from './captureStates'
+import type { CaptureStatus } from '../../shared/jobs/analysisJob'
 
 function isFlagged(results: AnalysisResult[], centreHz: number, parameter: 'T20' | 'T30'): boolean {
   return results.some((result) =>
@@ -64,9 +66,9 @@ function averageResponses(results: AnalysisResult[]): SurveySummaryDto['averaged
   return { frequencyHz: first.frequencyHz, magnitudeDb: Array.from(power, (p) => 10 * Math.log10(p / results.length)) }
 }
 
-function positionOf(capture: Capture, analysis: Analysis | undefined): SurveyPositionDto {
-  const isPending = capture.status === 'uploaded' || capture.status === 'queued' || capture.status === 'analysing'
-  const state = analysis ? 'analysed' : isPending ? 'pending' : capture.status === 'failed' ? 'failed' : 'not-analysed'
+function positionOf(capture: Capture, status: CaptureStatus, analysis: Analysis | undefined): SurveyPositionDto {
+  const isPending = status === 'uploaded' || status === 'queued' || status === 'analysing'
+  const state = analysis ? 'analysed' : isPending ? 'pending' : status === 'failed' ? 'failed' : 'not-analysed'
   return {
     captureId: capture.id,
     receiverLabel: capture.receiverLabel,
@@ -79,7 +81,7 @@ function positionOf(capture: Capture, analysis: Analysis | undefined): SurveyPos
     analysisId: analysis?.id ?? null,
     analysisSettings: analysis ? keyToSettings(analysis.settingsKey) : null,
     engineVersion: analysis?.engineVersion ?? null,
-    bands: (analysis?.result.bands ?? []).map((band) => ({
+    bands: (analysis?.result?.bands ?? []).map((band) => ({
       centreHz: band.centreHz,
       T20: band.T20,
       T30: band.T30,
@@ -98,11 +100,12 @@ function positionOf(capture: Capture, analysis: Analysis | undefined): SurveyPos
 export async function summariseSurvey(survey: Survey, bands: BandResolution): Promise<Omit<SurveySummaryDto, 'survey'>> {
   const captures = await Capture.findAll({ where: { surveyId: survey.id }, order: [['id', 'ASC']] })
   const analyses = await countingAnalyses(captures, survey, bands)
-  const positions = captures.map((capture) => positionOf(capture, analyses.get(capture.id)))
+  const views = await loadCaptureViews(captures)
+  const positions = captures.map((capture) => positionOf(capture, views.get(capture.id)!.state.status, analyses.get(capture.id)))
   const included = captures.filter((capture) => capture.excludedAt === null)
   const results = included.flatMap((capture) => {
     const analysis = analyses.get(capture.id)
-    return analysis ? [analysis.result] : []
+    return analysis?.result ? [analysis.result] : []
   })
   const averaged = spatialAverage(results.map((result) => result.bands), { bandsPerOctave: bands === 'octave' ? 1 : 3 })
   const includedPositions = positions.filter((p) => p.isIncluded)

@@ -1,5 +1,6 @@
 import { z } from 'zod'
-import type { CaptureStatus } from '../jobs/analysisJob'
+import type { AnalysisStatus, CaptureStatus } from '../jobs/analysisJob'
+import type { AnalysisHeadline } from '../jobs/analysisHeadline'
 import type { AnalysisResult, CaptureKind } from '../types/analysis'
 
 /** Multipart form fields arrive as strings: numbers are coerced, blanks become null. */
@@ -30,12 +31,30 @@ export const createCaptureFieldsSchema = z
   })
 export type CreateCaptureFields = z.infer<typeof createCaptureFieldsSchema>
 
-/** Mid-band values of the newest analysis, for tables. */
-export interface CaptureHeadline {
-  T30S: number | null
-  T20S: number | null
-  EDTS: number | null
-  C80Db: number | null
+/** Mid-band values of the analysis a capture shows, for tables (stored as columns of the analysis). */
+export type CaptureHeadline = AnalysisHeadline
+
+/** How the survey captures list can be ordered: upload order, labels, kind or a headline figure. */
+export const CAPTURE_SORT_KEYS = ['uploaded', 'receiver', 'source', 'kind', 'T30', 'EDT', 'C80'] as const
+export type CaptureSortKey = (typeof CAPTURE_SORT_KEYS)[number]
+export const CAPTURES_PAGE_SIZE_MAX = 200
+
+export const listCapturesQuerySchema = z.object({
+  page: z.coerce.number({ error: 'The page is a whole number from 1.' }).int('The page is a whole number from 1.').min(1, 'The page is a whole number from 1.').default(1),
+  pageSize: z.coerce.number().int('The page size is a whole number.').min(1, 'Show at least one capture a page.').max(CAPTURES_PAGE_SIZE_MAX, `Show at most ${CAPTURES_PAGE_SIZE_MAX} captures a page.`).default(50),
+  sort: z.enum(CAPTURE_SORT_KEYS, { error: `Sort by one of: ${CAPTURE_SORT_KEYS.join(', ')}.` }).default('uploaded'),
+  order: z.enum(['asc', 'desc'], { error: 'Order is asc or desc.' }).default('asc'),
+  /** Only captures with (true) or without (false) a finished analysis. */
+  analysed: z.enum(['true', 'false'], { error: 'analysed is true or false.' }).transform((value) => value === 'true').optional(),
+})
+export type ListCapturesQuery = z.infer<typeof listCapturesQuerySchema>
+
+/** One page of a survey's captures and how many there are in all. */
+export interface CapturePageDto {
+  items: CaptureDto[]
+  total: number
+  page: number
+  pageSize: number
 }
 
 export interface CaptureDto {
@@ -61,6 +80,7 @@ export interface CaptureDto {
   bitDepth: number
   channelCount: number
   durationS: number
+  /** Derived from the capture's analyses (shared/jobs/captureState.ts). */
   status: CaptureStatus
   statusMessage: string | null
   /** An excluded capture stays visible but counts in no average, verdict or export. */
@@ -70,9 +90,10 @@ export interface CaptureDto {
   /** The analysis an owner or engineer pinned for reporting; null = the default rule. */
   pinnedAnalysisId: number | null
   /** The analysis that counts for this capture at the survey's settings (pinned or default); null if none yet. */
-  countingAnalysisId?: number | null
-  /** Present on list and detail reads; null before the first analysis. */
-  headline?: CaptureHeadline | null
+  countingAnalysisId: number | null
+  /** The analysis whose figures the capture shows (the counting one, else the newest done); null before the first is done. */
+  shownAnalysisId: number | null
+  headline: CaptureHeadline | null
   createdAt: string
   updatedAt: string
 }
@@ -91,6 +112,7 @@ export const pinAnalysisBodySchema = z.object({
 })
 export type PinAnalysisBody = z.infer<typeof pinAnalysisBodySchema>
 
+/** A finished analysis with its result. */
 export interface AnalysisDto {
   id: number
   captureId: number
@@ -101,5 +123,26 @@ export interface AnalysisDto {
   isCounting: boolean
   /** True when an owner or engineer pinned it explicitly. */
   isPinned: boolean
+  finishedAt: string | null
   result: AnalysisResult
+}
+
+/** One analysis's job state, as the live stream and the analyses list report it. */
+export interface AnalysisStateDto {
+  id: number
+  status: AnalysisStatus
+  statusMessage: string | null
+  error: string | null
+}
+
+/** The event a survey's live stream sends when one of its captures changes (`event: capture`). */
+export interface SurveyCaptureEvent {
+  capture: CaptureDto
+  /** The analysis whose change caused the event. */
+  analysis: AnalysisStateDto
+}
+
+/** `event: capture-deleted`. */
+export interface SurveyCaptureDeletedEvent {
+  captureId: number
 }

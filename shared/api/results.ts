@@ -4,6 +4,7 @@ import type { BandVerdict } from '../room/targets/bandVerdict'
 import type { TargetMask } from '../room/targets/targetMask'
 import type { AnalysisSettings, BandResolution, DecayCurve } from '../types/analysis'
 import type { SurveyAnalysisSettings, SurveyDto } from './surveys'
+import type { AnalysisStatus } from '../jobs/analysisJob'
 
 export const bandResolutionQuerySchema = z.object({
   bands: z.enum(['octave', 'third']).default('octave'),
@@ -139,8 +140,25 @@ export interface AnalysisListItemDto {
   isCounting: boolean
   isPinned: boolean
   settings: AnalysisSettings
-  engineVersion: string
+  status: AnalysisStatus
+  statusMessage: string | null
+  error: string | null
+  attempts: number
+  /** Null until the analysis is done. */
+  engineVersion: string | null
   createdAt: string
+  queuedAt: string
+  finishedAt: string | null
+}
+
+/** The answer to a re-analysis request: the row (new, queued again, or as it was). */
+export interface ReanalysisDto {
+  captureId: number
+  analysisId: number
+  settingsKey: string
+  status: AnalysisStatus
+  /** True when this request started a run; false when the settings were already done or under way. */
+  isNewRun: boolean
 }
 
 export const sweepQuerySchema = z

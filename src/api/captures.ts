@@ -1,4 +1,4 @@
-import type { AnalysisDto, AnalysisListItemDto, CaptureDto, CaptureInclusionBody } from '@shared/api'
+import type { AnalysisDto, AnalysisListItemDto, CaptureDto, CaptureInclusionBody, CapturePageDto, CaptureSortKey, ReanalysisDto } from '@shared/api'
 import type { AnalysisSettings } from '@shared/types/analysis'
 import { apiUrl, request, toQuery } from './http'
 import { uploadForm, type UploadOptions } from './upload'
@@ -8,8 +8,25 @@ export type CaptureListItem = CaptureDto
 
 export type ExportFormat = 'csv' | 'json'
 
-export function listCaptures(surveyId: number): Promise<CaptureListItem[]> {
-  return request<CaptureListItem[]>('GET', `/surveys/${surveyId}/captures`)
+export interface CapturePageQuery {
+  page?: number
+  pageSize?: number
+  sort?: CaptureSortKey
+  order?: 'asc' | 'desc'
+  /** Only captures with a finished analysis (true) or without one (false). */
+  analysed?: boolean
+}
+
+/** One page of a survey's captures, ordered on the server. */
+export function listCaptures(surveyId: number, query: CapturePageQuery = {}): Promise<CapturePageDto> {
+  const params = {
+    page: query.page?.toString(),
+    pageSize: query.pageSize?.toString(),
+    sort: query.sort,
+    order: query.order,
+    analysed: query.analysed === undefined ? undefined : String(query.analysed),
+  }
+  return request<CapturePageDto>('GET', `/surveys/${surveyId}/captures${toQuery(params)}`)
 }
 
 /** Multipart upload of one WAV (and optional reference sweep) with byte progress; 202 on success. */
@@ -34,9 +51,9 @@ export function listAnalyses(captureId: number): Promise<AnalysisListItemDto[]> 
   return request<AnalysisListItemDto[]>('GET', `/captures/${captureId}/analyses`)
 }
 
-/** Queues a re-analysis with other settings; earlier analyses are kept. */
-export function requestAnalysis(captureId: number, settings: AnalysisSettings): Promise<unknown> {
-  return request<unknown>('POST', `/captures/${captureId}/analyses`, settings)
+/** Asks for an analysis with these settings (queued once; earlier analyses are kept). */
+export function requestAnalysis(captureId: number, settings: AnalysisSettings): Promise<ReanalysisDto> {
+  return request<ReanalysisDto>('POST', `/captures/${captureId}/analyses`, settings)
 }
 
 /** The export of the analysis shown (by id), or of the one that counts when none is given. */

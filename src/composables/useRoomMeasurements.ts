@@ -1,5 +1,5 @@
 import { computed, ref, watch, type Ref } from 'vue'
-import type { CaptureDto } from '@shared/api'
+import { CAPTURES_PAGE_SIZE_MAX, type CaptureDto } from '@shared/api'
 import * as capturesApi from '@/api/captures'
 import { getSurveySummary } from '@/api/results'
 import { listSurveys } from '@/api/surveys'
@@ -28,10 +28,11 @@ export function useRoomMeasurements(roomId: Ref<number>) {
     const surveys = (await listSurveys(id)).filter((s) => s.captureCount > 0)
     const [summaries, captureLists] = await Promise.all([
       Promise.all(surveys.map((s) => getSurveySummary(s.id, 'octave'))),
-      Promise.all(surveys.map((s) => capturesApi.listCaptures(s.id))),
+      // Analysed captures only (the server filters), as many as a page holds.
+      Promise.all(surveys.map((s) => capturesApi.listCaptures(s.id, { analysed: true, pageSize: CAPTURES_PAGE_SIZE_MAX }).then((page) => page.items))),
     ])
     const measured: MeasuredSurvey[] = summaries.filter((s) => s.analysedCount > 0).map(summaryToMeasuredSurvey)
-    const captures = captureLists.flatMap((list, i) => list.filter((c) => c.status === 'done').map((c) => captureChoice(c, surveys[i]!.name)))
+    const captures = captureLists.flatMap((list, i) => list.map((c) => captureChoice(c, surveys[i]!.name)))
     return { measured, captures }
   })
   watch(roomId, (id) => void load.run(id), { immediate: true })

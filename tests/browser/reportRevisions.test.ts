@@ -4,7 +4,7 @@ import type { Browser, Page } from 'playwright-core'
 import { launchChromium, screenshotPath } from '../helpers/browser'
 import { startRunningApp, type RunningApp } from '../helpers/runningApp'
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
-import { Capture, Room, Survey } from '../../server/models'
+import { Analysis, Capture, Room, Survey } from '../../server/models'
 import { createSmtpMailer } from '../../server/mail/mailer'
 import { readFakeInbox, startFakeSmtpInbox } from '../../server/mail/fakeSmtpInbox'
 import { mkdtempSync } from 'node:fs'
@@ -39,7 +39,7 @@ afterAll(async () => {
 
 /** Waits until the worker has analysed every demo capture (a report is refused before). */
 async function waitForAnalyses(): Promise<void> {
-  await expect.poll(async () => Capture.count({ where: { status: ['uploaded', 'queued', 'analysing'] } }), { timeout: 120_000, interval: 500 }).toBe(0)
+  await expect.poll(async () => Analysis.count({ where: { status: ['queued', 'analysing'] } }), { timeout: 120_000, interval: 500 }).toBe(0)
 }
 
 describe('a sent report stays as it was sent', () => {

@@ -34,7 +34,7 @@ export async function addAnalysedCapture(survey: Survey, options: { t60S: number
     surveyId: survey.id, uploadedById: options.uploadedById ?? null, kind: 'impulse', receiverLabel: options.label,
     positionXM: null, positionYM: null, positionZM: null, sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256: null,
     originalName: `${options.label.replace(/\W+/g, '-').toLowerCase()}.wav`, sha256, byteSize: bytes.length, sampleRateHz: 48_000, bitDepth: 32, channelCount: 1,
-    durationS: readWavFacts(bytes).durationS, statusMessage: null,
+    durationS: readWavFacts(bytes).durationS,
   })
   await analyseInProcess(capture.id, options.store)
   return capture

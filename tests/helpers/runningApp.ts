@@ -9,7 +9,7 @@ import { startTestServices, type TestServices } from './testServices'
 import { Worker } from 'bullmq'
 import { Redis } from 'ioredis'
 import { processAnalysisJob } from '../../worker/processAnalysisJob'
-import { requeueUploadedCaptures } from '../../server/services/capturesService'
+import { superviseAnalysisQueue } from '../../server/services/analysisJobsService'
 import { ANALYSIS_QUEUE_NAME, type AnalysisJobPayload } from '../../shared/jobs/analysisJob'
 
 export interface RunningApp {
@@ -40,8 +40,8 @@ export async function startRunningApp(options: { withWorker?: boolean; mailer?: 
   if (options.withWorker) {
     workerConnection = new Redis(services.config.REDIS_URL, { maxRetriesPerRequest: null })
     const { store } = services
-    worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store }), { connection: workerConnection })
-    await requeueUploadedCaptures(ringdown.queue)
+    worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store }), { connection: workerConnection, prefix: services.config.QUEUE_PREFIX })
+    await superviseAnalysisQueue(ringdown.queue)
   }
   return {
     baseUrl: `http://127.0.0.1:${port}`,

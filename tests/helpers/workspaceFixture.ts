@@ -36,7 +36,7 @@ export async function createWorkspaceFixture(label: string): Promise<WorkspaceFi
   const sharedCapture = await Capture.create({
     surveyId: sharedSurvey.id, uploadedById: users.engineer.id, kind: 'impulse', positionXM: null, positionYM: null, positionZM: null,
     sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256: null, originalName: 'fixture.wav', sha256: '0'.repeat(64),
-    byteSize: 0, sampleRateHz: 48_000, bitDepth: 24, channelCount: 1, durationS: 1, status: 'done', statusMessage: null,
+    byteSize: 0, sampleRateHz: 48_000, bitDepth: 24, channelCount: 1, durationS: 1,
   })
   return { workspace, users, sharedRoom, privateRoom, sharedSurvey, privateSurvey: await survey(privateRoom.id), sharedCapture }
 }

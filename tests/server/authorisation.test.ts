@@ -53,6 +53,7 @@ function routesIntoB() {
     ['patch', `/api/surveys/${b.sharedSurvey.id}`, { name: 'Taken over' }],
     ['delete', `/api/surveys/${b.sharedSurvey.id}`],
     ['get', `/api/surveys/${b.sharedSurvey.id}/captures`],
+    ['get', `/api/surveys/${b.sharedSurvey.id}/events`],
     ['post', `/api/surveys/${b.sharedSurvey.id}/captures`, { kind: 'impulse' }],
     ['get', `/api/surveys/${b.sharedSurvey.id}/summary`],
     ['get', `/api/surveys/${b.sharedSurvey.id}/export?format=csv`],

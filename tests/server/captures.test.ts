@@ -86,7 +86,7 @@ describe('POST /api/surveys/:surveyId/captures — a good upload', () => {
     expect(response.body.durationS).toBeCloseTo(1, 6)
     expect(await storedFiles()).toEqual([contentKey(response.body.sha256)])
     expect((await services.store.head(contentKey(response.body.sha256)))?.byteSize).toBe(bytes.length)
-    const queue = new Queue(ANALYSIS_QUEUE_NAME, { connection: services.redis })
+    const queue = new Queue(ANALYSIS_QUEUE_NAME, { connection: services.redis, prefix: services.config.QUEUE_PREFIX })
     const jobs = await queue.getJobs(['waiting', 'delayed', 'prioritized'])
     expect(jobs.filter((job) => job.data.captureId === response.body.id)).toHaveLength(1)
     await queue.close()
@@ -95,7 +95,7 @@ describe('POST /api/surveys/:surveyId/captures — a good upload', () => {
   it('lists the survey captures and hides them from another workspace', async () => {
     const list = await client.get(`/api/surveys/${a.sharedSurvey.id}/captures`)
     expect(list.status).toBe(200)
-    const uploaded = list.body.filter((c: { originalName: string }) => c.originalName === 'capture.wav')
+    const uploaded = list.body.items.filter((c: { originalName: string }) => c.originalName === 'capture.wav')
     expect(uploaded).toHaveLength(1)
     expect(uploaded[0].headline).toBeNull()
     const outsider = await signedInAgent(ringdown.app, b.users.owner.email, FIXTURE_PASSWORD)
@@ -106,7 +106,7 @@ describe('POST /api/surveys/:surveyId/captures — a good upload', () => {
   })
 
   it('lets a viewer read but not delete, and the uploader delete, removing the file', async () => {
-    const capture = (await client.get(`/api/surveys/${a.sharedSurvey.id}/captures`)).body.find((c: { originalName: string }) => c.originalName === 'capture.wav')
+    const capture = (await client.get(`/api/surveys/${a.sharedSurvey.id}/captures`)).body.items.find((c: { originalName: string }) => c.originalName === 'capture.wav')
     expect((await viewer.get(`/api/captures/${capture.id}`)).status).toBe(200)
     expect((await viewer.delete(`/api/captures/${capture.id}`)).status).toBe(403)
     expect((await client.delete(`/api/captures/${a.sharedCapture.id}`)).status).toBe(403) // uploaded by the engineer

@@ -2,9 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { Queue } from 'bullmq'
 import { Redis } from 'ioredis'
 import { createApp, type RingdownApp } from '../../server/app'
-import { Capture } from '../../server/models'
 import { createAnalysisQueue } from '../../server/queue/analysisQueue'
-import { requeueUploadedCaptures } from '../../server/services/capturesService'
+import { dispatchWaitingAnalyses } from '../../server/services/analysisJobsService'
+import { captureStatusOf } from '../helpers/captureStatus'
 import { ANALYSIS_QUEUE_NAME } from '../../shared/jobs/analysisJob'
 import { startTestServices, type TestServices } from '../helpers/testServices'
 import { signedInAgent } from '../helpers/apiAgent'
@@ -31,7 +31,7 @@ afterAll(async () => {
 })
 
 describe('an upload accepted while Redis is down', () => {
-  it('is kept as uploaded and queued exactly once when Redis is back', async () => {
+  it('reads uploaded and is queued exactly once when Redis is back', async () => {
     const engineer = await signedInAgent(outage.app, fixture.users.engineer.email, FIXTURE_PASSWORD)
     const token = await engineer.refreshCsrf()
     const response = await engineer.agent
@@ -43,10 +43,10 @@ describe('an upload accepted while Redis is down', () => {
     expect(response.body.status).toBe('uploaded')
 
     const liveQueue = createAnalysisQueue(services.redis)
-    expect(await requeueUploadedCaptures(liveQueue)).toBe(1)
-    expect(await requeueUploadedCaptures(liveQueue)).toBe(0)
-    expect((await Capture.findByPk(response.body.id))!.status).toBe('queued')
-    const inspector = new Queue(ANALYSIS_QUEUE_NAME, { connection: services.redis })
+    expect(await dispatchWaitingAnalyses(liveQueue)).toBe(1)
+    expect(await dispatchWaitingAnalyses(liveQueue)).toBe(0)
+    expect(await captureStatusOf(response.body.id)).toBe('queued')
+    const inspector = new Queue(ANALYSIS_QUEUE_NAME, { connection: services.redis, prefix: services.config.QUEUE_PREFIX })
     const jobs = await inspector.getJobs(['waiting'])
     expect(jobs.filter((job) => job.data.captureId === response.body.id)).toHaveLength(1)
     await Promise.all([inspector.close(), liveQueue.close()])

@@ -5,6 +5,7 @@ import { contentKey } from '../../server/storage/contentKeys'
 import { processAnalysisJob } from '../../worker/processAnalysisJob'
 import { compareSurveys } from '../../server/services/comparisonService'
 import { startTestServices, type TestServices } from '../helpers/testServices'
+import { captureStatusOf } from '../helpers/captureStatus'
 
 let services: TestServices
 
@@ -23,7 +24,7 @@ describe('seedDemoData', () => {
     const captures = await Capture.findAll()
     expect(captures).toHaveLength(6)
     for (const capture of captures) {
-      expect(capture.status).toBe('uploaded')
+      expect(await captureStatusOf(capture.id)).toBe('uploaded')
       expect((await services.store.head(contentKey(capture.sha256)))?.byteSize).toBe(Number(capture.byteSize))
     }
   })

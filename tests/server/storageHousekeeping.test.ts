@@ -30,7 +30,7 @@ async function captureNaming(sha256: string, referenceSha256: string | null = nu
   return Capture.create({
     surveyId: a.sharedSurvey.id, uploadedById: null, kind: 'impulse', positionXM: null, positionYM: null, positionZM: null,
     sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256, originalName: 'kept.wav', sha256,
-    byteSize: 4, sampleRateHz: 48_000, bitDepth: 16, channelCount: 1, durationS: 1, statusMessage: null,
+    byteSize: 4, sampleRateHz: 48_000, bitDepth: 16, channelCount: 1, durationS: 1,
   })
 }
 

@@ -12,6 +12,7 @@ import { startTestServices, type TestServices } from '../helpers/testServices'
 import { signedInAgent, type ApiAgent } from '../helpers/apiAgent'
 import { createWorkspaceFixture, FIXTURE_PASSWORD, type WorkspaceFixture } from '../helpers/workspaceFixture'
 import { decayingNoiseWav } from '../helpers/wavFixtures'
+import { captureStatusOf, waitForCaptureStatus } from '../helpers/captureStatus'
 
 let services: TestServices
 let ringdown: RingdownApp
@@ -26,7 +27,7 @@ beforeAll(async () => {
   fixture = await createWorkspaceFixture('Zeta')
   engineer = await signedInAgent(ringdown.app, fixture.users.engineer.email, FIXTURE_PASSWORD)
   workerConnection = new Redis(services.config.REDIS_URL, { maxRetriesPerRequest: null })
-  worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store: services.store }), { connection: workerConnection })
+  worker = new Worker<AnalysisJobPayload>(ANALYSIS_QUEUE_NAME, (job) => processAnalysisJob(job, { store: services.store }), { connection: workerConnection, prefix: services.config.QUEUE_PREFIX })
 })
 afterAll(async () => {
   await worker.close()
@@ -43,20 +44,15 @@ async function uploadAndWait(bytes: Uint8Array): Promise<Capture> {
     .field('kind', 'impulse')
     .attach('file', Buffer.from(bytes), 'ir.wav')
   expect(response.status).toBe(202)
-  const deadline = Date.now() + 60_000
-  for (;;) {
-    const capture = (await Capture.findByPk(response.body.id))!
-    if (capture.status === 'done' || capture.status === 'failed') return capture
-    if (Date.now() > deadline) throw new Error(`capture stuck in ${capture.status}`)
-    await new Promise((resolve) => setTimeout(resolve, 100))
-  }
+  await waitForCaptureStatus(response.body.id, ['done', 'failed'])
+  return (await Capture.findByPk(response.body.id))!
 }
 
 describe('upload → queue → worker → analysis', () => {
   it('stores exactly the engine result for the uploaded file', async () => {
     const bytes = decayingNoiseWav({ t60S: 0.5, durationS: 1.5 })
     const capture = await uploadAndWait(bytes)
-    expect(capture.status).toBe('done')
+    expect(await captureStatusOf(capture.id)).toBe('done')
     const analyses = await Analysis.findAll({ where: { captureId: capture.id } })
     expect(analyses).toHaveLength(1)
     const decoded = decodeWav(bytes)
@@ -70,8 +66,10 @@ describe('upload → queue → worker → analysis', () => {
 
   it('stores one analysis when the same job runs twice (idempotent retry)', async () => {
     const capture = await uploadAndWait(decayingNoiseWav({ seed: 11 }))
-    const rerun = { data: { captureId: capture.id }, attemptsMade: 1, opts: { attempts: 3 }, updateProgress: async () => {} }
+    const [analysis] = await Analysis.findAll({ where: { captureId: capture.id } })
+    const rerun = { data: { analysisId: analysis!.id, captureId: capture.id }, attemptsMade: 1, opts: { attempts: 3 }, updateProgress: async () => {} }
     await processAnalysisJob(rerun, { store: services.store })
     expect(await Analysis.count({ where: { captureId: capture.id } })).toBe(1)
+    expect((await analysis!.reload()).updatedAt).toEqual(analysis!.updatedAt)
   })
 })

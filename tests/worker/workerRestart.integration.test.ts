@@ -3,7 +3,9 @@ import { spawn, type ChildProcess } from 'node:child_process'
 import { Analysis, Capture } from '../../server/models'
 import { storeContentBytes } from '../../server/storage/storeContentBytes'
 import { createAnalysisQueue, type AnalysisQueue } from '../../server/queue/analysisQueue'
-import { settingsToKey, DEFAULT_ANALYSIS_SETTINGS } from '../../shared/jobs/analysisSettingsKey'
+import { dispatchAnalysis, recordAnalysisRequest } from '../../server/services/analysisJobsService'
+import { DEFAULT_ANALYSIS_SETTINGS } from '../../shared/jobs/analysisSettingsKey'
+import { captureStatusOf } from '../helpers/captureStatus'
 import { synthesizeRoomImpulse } from '../../shared/acoustics/synthetic/synthesizeRoomImpulse'
 import { encodeWav } from '../../shared/acoustics/wav/encodeWav'
 import { startTestServices, type TestServices } from '../helpers/testServices'
@@ -53,18 +55,20 @@ describe('a worker killed in the middle of a job', () => {
     const capture = await Capture.create({
       surveyId: fixture.sharedSurvey.id, uploadedById: null, kind: 'impulse', positionXM: null, positionYM: null, positionZM: null,
       sweepF1Hz: null, sweepF2Hz: null, sweepDurationS: null, referenceSha256: null, originalName: 'long.wav', sha256,
-      byteSize: impulse.length * 4, sampleRateHz, bitDepth: 32, channelCount: 1, durationS: 20, statusMessage: null,
+      byteSize: impulse.length * 4, sampleRateHz, bitDepth: 32, channelCount: 1, durationS: 20,
     })
-    await queue.enqueue({ captureId: capture.id, settingsKey: settingsToKey({ ...DEFAULT_ANALYSIS_SETTINGS, bands: 'third' }) })
+    const { analysis } = await recordAnalysisRequest(capture.id, { ...DEFAULT_ANALYSIS_SETTINGS, bands: 'third' })
+    expect(await dispatchAnalysis(analysis, queue)).toBe(true)
 
     const first = startWorkerProcess()
-    await waitFor(async () => ((await capture.reload()).status === 'analysing' ? true : null), 60_000)
+    await waitFor(async () => ((await captureStatusOf(capture.id)) === 'analysing' ? true : null), 60_000)
     first.kill('SIGKILL')
     await new Promise((resolve) => first.once('exit', resolve))
-    expect(await Analysis.count({ where: { captureId: capture.id } })).toBe(0)
+    expect(await Analysis.count({ where: { captureId: capture.id, status: 'done' } })).toBe(0)
 
     startWorkerProcess()
-    await waitFor(async () => ((await capture.reload()).status === 'done' ? true : null), 90_000, 200)
+    await waitFor(async () => ((await captureStatusOf(capture.id)) === 'done' ? true : null), 90_000, 200)
     expect(await Analysis.count({ where: { captureId: capture.id } })).toBe(1)
+    expect((await analysis.reload()).attempts).toBe(2)
   }, 150_000)
 })
