@@ -20,6 +20,9 @@ import { capturesRouter } from './routes/capturesRouter'
 import { resultsRouter } from './routes/resultsRouter'
 import { roomModelRouter } from './routes/roomModelRouter'
 import { invitationsRouter } from './routes/invitationsRouter'
+import { apiTokensRouter } from './routes/apiTokensRouter'
+import { openApiRouter } from './routes/openApiRouter'
+import { apiTokenAuthentication, exceptApiTokenRequests } from './middleware/apiTokenAuth'
 import { createSmtpMailer, type Mailer } from './mail/mailer'
 import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
@@ -112,7 +115,8 @@ export function createApp({
     const health = await checkHealth(sequelize, redis, APP_VERSION)
     res.status(health.status === 'ok' ? 200 : 503).json(health)
   })
-  app.use('/api', csrfSynchronisedProtection)
+  app.use('/api', apiTokenAuthentication({ requestsPerMinute: config.API_TOKEN_RATE_LIMIT }))
+  app.use('/api', exceptApiTokenRequests(csrfSynchronisedProtection))
   app.use(
     '/api/auth',
     authRouter({ sequelize, signInLimitPerWindow: config.SIGN_IN_RATE_LIMIT, generateCsrfToken: (req) => generateToken(req as express.Request), mail }),
@@ -132,6 +136,8 @@ export function createApp({
     })
   }
   app.use('/api/surveys', surveysRouter())
+  app.use('/api/tokens', apiTokensRouter())
+  app.use('/api', openApiRouter(app, APP_VERSION))
   app.use('/api', notFoundHandler)
 
   if (existsSync(path.join(clientDir, 'index.html'))) {

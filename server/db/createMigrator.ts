@@ -4,6 +4,7 @@ import * as initial from '../migrations/0001-initial'
 import * as analyses from '../migrations/0002-analyses'
 import * as roomModels from '../migrations/0003-room-models'
 import * as invitationsSharesActivity from '../migrations/0004-invitations-shares-activity'
+import * as apiTokens from '../migrations/0050-api-tokens'
 
 /**
  * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
@@ -14,6 +15,7 @@ const MIGRATIONS = [
   { name: '0002-analyses', module: analyses },
   { name: '0003-room-models', module: roomModels },
   { name: '0004-invitations-shares-activity', module: invitationsSharesActivity },
+  { name: '0050-api-tokens', module: apiTokens },
 ]
 
 export function createMigrator(sequelize: Sequelize) {

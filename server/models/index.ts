@@ -13,15 +13,16 @@ import { CustomMaterial } from './CustomMaterial'
 import { PasswordReset } from './PasswordReset'
 import { ShareLink } from './ShareLink'
 import { Activity } from './Activity'
+import { ApiToken } from './ApiToken'
 
-export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity }
+export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, ApiToken }
 
 let initialisedFor: Sequelize | null = null
 
 /** Initialises every model on one Sequelize instance and wires the associations (once). */
 export function initModels(sequelize: Sequelize): void {
   if (initialisedFor === sequelize) return
-  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity]) {
+  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, ApiToken]) {
     model.initModel(sequelize)
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' })
@@ -41,5 +42,6 @@ export function initModels(sequelize: Sequelize): void {
   Analysis.belongsTo(Capture, { foreignKey: 'captureId', as: 'capture' })
   Activity.belongsTo(User, { foreignKey: 'userId', as: 'user' })
   Workspace.hasMany(Invitation, { foreignKey: 'workspaceId', as: 'invitations' })
+  ApiToken.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' })
   initialisedFor = sequelize
 }

@@ -5,6 +5,8 @@ import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
 import { updateSurveyBodySchema } from '../../shared/api/surveys'
+import { documentRoutes } from '../openapi/routeDocs'
+import { surveyResponseSchema } from '../openapi/responseSchemas'
 
 const surveyParams = z.object({ surveyId: idParam })
 
@@ -16,3 +18,9 @@ export function surveysRouter() {
   router.delete('/:surveyId', validate({ params: surveyParams }), surveys.remove)
   return router
 }
+
+documentRoutes('Surveys', {
+  'GET /api/surveys/{surveyId}': { summary: 'One survey', response: surveyResponseSchema },
+  'PATCH /api/surveys/{surveyId}': { summary: 'Change a survey', response: surveyResponseSchema },
+  'DELETE /api/surveys/{surveyId}': { summary: 'Delete a survey and its captures', status: 204, responseDescription: 'Deleted.' },
+})
