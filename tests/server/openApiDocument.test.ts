@@ -32,7 +32,7 @@ describe('GET /api/openapi.json', () => {
   it('is a valid OpenAPI 3.1 document', async () => {
     // The validator checks against the published OpenAPI 3.1 JSON Schema (spec.openapis.org/oas/3.1).
     const validator = new Validator()
-    const result = await validator.validate(document as object)
+    const result = await validator.validate(document as unknown as Parameters<Validator['validate']>[0])
     expect(result.errors ?? [], JSON.stringify(result.errors, null, 2)).toEqual([])
     expect(result.valid).toBe(true)
     expect(validator.version).toBe('3.1')
