@@ -39,6 +39,8 @@ export const router = createRouter({
     { path: '/reset-password/:token', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), props: tokenProp, meta: { access: 'guest', title: 'Choose a new password' } },
     { path: '/shared/:token', name: 'shared', component: () => import('@/views/SharedComparisonView.vue'), props: tokenProp, meta: { access: 'any', title: 'Shared report' } },
     { path: '/dev/mailbox', name: 'dev-mailbox', component: () => import('@/views/DevMailboxView.vue'), meta: { access: 'any', title: 'Mailbox (this machine)' } },
+    { path: '/settings', name: 'settings', component: () => import('@/views/SettingsView.vue'), meta: { title: 'Settings' } },
+    { path: '/api-reference', name: 'api-reference', component: () => import('@/views/ApiReferenceView.vue'), meta: { access: 'any', title: 'API reference' } },
     { path: '/workspace/members', name: 'members', component: () => import('@/views/MembersView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Members' } },
     { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { access: 'any', title: 'Page not found' } },
   ],
