@@ -99,6 +99,8 @@ export function describeType(schema: SchemaObject): string {
   if (schema.$ref) return refName(schema.$ref)
   if (schema.enum) return `one of ${schema.enum.map(String).join(', ')}`
   const variants = schema.anyOf ?? schema.oneOf
+  // A union of single values (zod literals) reads as one list: `one of 1, 3, 6`.
+  if (variants?.every((variant) => variant.enum?.length === 1)) return `one of ${variants.map((variant) => String(variant.enum![0])).join(', ')}`
   if (variants) return variants.map(describeType).join(' or ')
   if (schema.type === 'array' && schema.items) return `array of ${describeType(schema.items)}`
   if (schema.contentMediaType) return `file (${schema.contentMediaType})`
@@ -114,8 +116,9 @@ export function describeNotes(schema: SchemaObject): string {
   if (schema.minimum !== undefined) notes.push(`≥ ${schema.minimum}`)
   if (schema.exclusiveMinimum !== undefined) notes.push(`> ${schema.exclusiveMinimum}`)
   if (schema.maximum !== undefined) notes.push(`≤ ${schema.maximum}`)
-  if (schema.minLength !== undefined) notes.push(`at least ${schema.minLength} characters`)
-  if (schema.maxLength !== undefined) notes.push(`at most ${schema.maxLength} characters`)
+  const characters = (count: number) => `${count} character${count === 1 ? '' : 's'}`
+  if (schema.minLength !== undefined) notes.push(`at least ${characters(schema.minLength)}`)
+  if (schema.maxLength !== undefined) notes.push(`at most ${characters(schema.maxLength)}`)
   if (schema.minItems !== undefined) notes.push(`at least ${schema.minItems} items`)
   if (schema.maxItems !== undefined) notes.push(`at most ${schema.maxItems} items`)
   if (schema.pattern) notes.push(`matches ${schema.pattern}`)
@@ -182,4 +185,9 @@ export function outlineDocument(document: OpenApiDocument): TagOutline[] {
     }
   }
   return [...byTag.entries()].map(([tag, operations]) => ({ tag, operations }))
+}
+
+/** Text with `backtick` spans (as the document's descriptions use them) → plain and code segments. */
+export function splitInlineCode(text: string): { text: string; isCode: boolean }[] {
+  return text.split('`').map((part, index) => ({ text: part, isCode: index % 2 === 1 })).filter((segment) => segment.text.length > 0)
 }
