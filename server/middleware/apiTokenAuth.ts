@@ -35,6 +35,8 @@ function refuse(res: Response, error: HttpError): never {
 /** `Authorization: Bearer <token>` → the token's user and scope on the request; no header → untouched. */
 const authenticate: RequestHandler = async (req, res, next) => {
   const header = req.headers.authorization
+  // A fresh scope per request: nothing of an earlier request on the same connection carries over.
+  pinActingScope(null)
   if (header === undefined) return next()
   const match = /^Bearer\s+(\S+)\s*$/i.exec(header)
   if (!match) refuse(res, new ApiTokenRefusedError('invalid-token', 'Send the API token as "Authorization: Bearer <token>".'))
