@@ -23,6 +23,9 @@ import { invitationsRouter } from './routes/invitationsRouter'
 import { reportInputsRouter } from './routes/reportInputsRouter'
 import { surveyEventsRouter } from './routes/surveyEventsRouter'
 import { createSurveyEventHub, type SurveyEventHub } from './events/surveyEventHub'
+import { apiTokensRouter } from './routes/apiTokensRouter'
+import { openApiRouter } from './routes/openApiRouter'
+import { apiTokenAuthentication, exceptApiTokenRequests } from './middleware/apiTokenAuth'
 import { createSmtpMailer, type Mailer } from './mail/mailer'
 import { readFakeInbox } from './mail/fakeSmtpInbox'
 import { createAnalysisQueue, type AnalysisQueue } from './queue/analysisQueue'
@@ -124,7 +127,8 @@ export function createApp({
     const health = await checkHealth(sequelize, redis, APP_VERSION)
     res.status(health.status === 'ok' ? 200 : 503).json(health)
   })
-  app.use('/api', csrfSynchronisedProtection)
+  app.use('/api', apiTokenAuthentication({ requestsPerMinute: config.API_TOKEN_RATE_LIMIT }))
+  app.use('/api', exceptApiTokenRequests(csrfSynchronisedProtection))
   app.use(
     '/api/auth',
     authRouter({ sequelize, signInLimitPerWindow: config.SIGN_IN_RATE_LIMIT, generateCsrfToken: (req) => generateToken(req as express.Request), mail }),
@@ -146,6 +150,8 @@ export function createApp({
     })
   }
   app.use('/api/surveys', surveysRouter({ store }))
+  app.use('/api/tokens', apiTokensRouter())
+  app.use('/api', openApiRouter(app, APP_VERSION))
   app.use('/api', notFoundHandler)
 
   if (existsSync(path.join(clientDir, 'index.html'))) {

@@ -28,6 +28,8 @@ const envSchema = z.object({
   /** The address people reach the product at, for links in e-mails; default http://HOST:PORT. */
   PUBLIC_URL: z.string().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+  /** Requests per minute one API token may make (uploads and status polls of a measuring rig). */
+  API_TOKEN_RATE_LIMIT: z.coerce.number().int().positive().default(600),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   /**
    * Object storage through the S3 API. Without S3_ENDPOINT the SDK's own endpoint for S3_REGION is

@@ -8,6 +8,8 @@ declare global {
   namespace Express {
     interface User {
       id: number
+      /** Set when the request authenticated with an API token (server/middleware/apiTokenAuth.ts). */
+      tokenScope?: import('./actingScope').TokenScope
     }
   }
 }

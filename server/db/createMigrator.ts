@@ -11,6 +11,7 @@ import * as analysisChangeNotifications from '../migrations/0012-analysis-change
 import * as customTargetsAndProfiles from '../migrations/0030-custom-targets-and-profiles'
 import * as captureInclusionAndPin from '../migrations/0031-capture-inclusion-and-pin'
 import * as reportRevisions from '../migrations/0032-report-revisions'
+import * as apiTokens from '../migrations/0050-api-tokens'
 
 /**
  * Migrations are listed explicitly (not globbed) so the worker, tests and the CLI all see the same
@@ -28,6 +29,7 @@ const MIGRATIONS = [
   { name: '0030-custom-targets-and-profiles', module: customTargetsAndProfiles },
   { name: '0031-capture-inclusion-and-pin', module: captureInclusionAndPin },
   { name: '0032-report-revisions', module: reportRevisions },
+  { name: '0050-api-tokens', module: apiTokens },
 ]
 
 export function createMigrator(sequelize: Sequelize) {

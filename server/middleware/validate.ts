@@ -2,7 +2,7 @@ import type { RequestHandler } from 'express'
 import type { ZodType } from 'zod'
 import { ValidationError } from '../errors'
 
-interface Schemas {
+export interface Schemas {
   body?: ZodType
   params?: ZodType
   query?: ZodType
@@ -20,9 +20,10 @@ function fieldsOf(issues: { path: PropertyKey[]; message: string }[]): Record<st
 /**
  * Validates body, params and query with zod and replaces them with the parsed values.
  * Express 5 exposes `req.query` as a getter, so the parsed query is redefined on the request.
+ * The schemas stay readable on the middleware: the API document reads them from the routes.
  */
-export function validate(schemas: Schemas): RequestHandler {
-  return (req, _res, next) => {
+export function validate(schemas: Schemas): RequestHandler & { schemas: Schemas } {
+  const middleware: RequestHandler = (req, _res, next) => {
     for (const part of ['params', 'query', 'body'] as const) {
       const schema = schemas[part]
       if (!schema) continue
@@ -36,4 +37,5 @@ export function validate(schemas: Schemas): RequestHandler {
     }
     next()
   }
+  return Object.assign(middleware, { schemas })
 }

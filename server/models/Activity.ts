@@ -8,6 +8,8 @@ export class Activity extends Model<InferAttributes<Activity>, InferCreationAttr
   declare userId: number | null
   declare action: string
   declare summary: string
+  /** The API token the action was taken with; null for browser sessions. */
+  declare apiTokenId: CreationOptional<number | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -20,6 +22,7 @@ export class Activity extends Model<InferAttributes<Activity>, InferCreationAttr
         userId: { type: DataTypes.INTEGER, allowNull: true },
         action: { type: DataTypes.STRING(60), allowNull: false },
         summary: { type: DataTypes.STRING(500), allowNull: false },
+        apiTokenId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

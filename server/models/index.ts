@@ -17,14 +17,16 @@ import { CustomTarget } from './CustomTarget'
 import { WorkspaceProfile } from './WorkspaceProfile'
 import { ReportRevision } from './ReportRevision'
 
-export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, CustomTarget, WorkspaceProfile, ReportRevision }
+import { ApiToken } from './ApiToken'
+
+export { User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, CustomTarget, WorkspaceProfile, ReportRevision, ApiToken }
 
 let initialisedFor: Sequelize | null = null
 
 /** Initialises every model on one Sequelize instance and wires the associations (once). */
 export function initModels(sequelize: Sequelize): void {
   if (initialisedFor === sequelize) return
-  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, CustomTarget, WorkspaceProfile, ReportRevision]) {
+  for (const model of [User, Workspace, Membership, Room, RoomShare, Invitation, Survey, Capture, Analysis, RoomModel, CustomMaterial, PasswordReset, ShareLink, Activity, CustomTarget, WorkspaceProfile, ReportRevision, ApiToken]) {
     model.initModel(sequelize)
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' })
@@ -47,5 +49,6 @@ export function initModels(sequelize: Sequelize): void {
   ShareLink.belongsTo(ReportRevision, { foreignKey: 'reportRevisionId', as: 'reportRevision' })
   Room.hasMany(ReportRevision, { foreignKey: 'roomId', as: 'reportRevisions' })
   Workspace.hasMany(Invitation, { foreignKey: 'workspaceId', as: 'invitations' })
+  ApiToken.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' })
   initialisedFor = sequelize
 }

@@ -1,8 +1,9 @@
-import { Membership, Room, RoomShare } from '../models'
+import { Room, RoomShare } from '../models'
 import { ForbiddenError, NotFoundError } from '../errors'
 import type { Role } from '../../shared/api/common'
 import type { RoomPermissions } from '../../shared/api/rooms'
 import { mayInWorkspace, mayOnRoom, maySeeRoom, type RoomAction, type WorkspaceAction } from './policy'
+import { findActingRole } from './actingMembership'
 
 export interface RoomAccess {
   room: Room
@@ -12,10 +13,10 @@ export interface RoomAccess {
 
 /** The caller's role in a workspace, or a 404 when they are not a member (existence stays hidden). */
 export async function requireWorkspaceRole(userId: number, workspaceId: number, action: WorkspaceAction): Promise<Role> {
-  const membership = await Membership.findOne({ where: { userId, workspaceId } })
-  if (!membership) throw new NotFoundError('That workspace')
-  if (!mayInWorkspace(membership.role, action)) throw new ForbiddenError()
-  return membership.role
+  const role = await findActingRole(userId, workspaceId)
+  if (!role) throw new NotFoundError('That workspace')
+  if (!mayInWorkspace(role, action)) throw new ForbiddenError()
+  return role
 }
 
 /**
@@ -25,12 +26,12 @@ export async function requireWorkspaceRole(userId: number, workspaceId: number, 
 export async function requireRoomAccess(userId: number, roomId: number, action: RoomAction): Promise<RoomAccess> {
   const room = await Room.findByPk(roomId)
   if (!room) throw new NotFoundError('That room')
-  const membership = await Membership.findOne({ where: { userId, workspaceId: room.workspaceId } })
-  if (!membership) throw new NotFoundError('That room')
+  const role = await findActingRole(userId, room.workspaceId)
+  if (!role) throw new NotFoundError('That room')
   const isShared = (await RoomShare.count({ where: { roomId, userId } })) > 0
-  if (!maySeeRoom(membership.role, isShared)) throw new NotFoundError('That room')
-  if (!mayOnRoom(membership.role, isShared, action)) throw new ForbiddenError()
-  return { room, role: membership.role, isShared }
+  if (!maySeeRoom(role, isShared)) throw new NotFoundError('That room')
+  if (!mayOnRoom(role, isShared, action)) throw new ForbiddenError()
+  return { room, role, isShared }
 }
 
 export function roomPermissions(role: Role, isShared: boolean): RoomPermissions {

@@ -8,6 +8,8 @@ import { registerBodySchema, signInBodySchema } from '../../shared/api/auth'
 import { linkTokenParamsSchema, passwordResetBodySchema, passwordResetRequestSchema } from '../../shared/api/invitations'
 import type { MailContext } from '../services/invitationsService'
 import { HttpError } from '../errors'
+import { documentRoutes } from '../openapi/routeDocs'
+import { meResponseSchema } from '../openapi/responseSchemas'
 
 export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow: number; generateCsrfToken: (req: Express.Request) => string; mail: MailContext }) {
   const router = Router()
@@ -38,3 +40,13 @@ export function authRouter(options: { sequelize: Sequelize; signInLimitPerWindow
   )
   return router
 }
+
+documentRoutes('Account', {
+  'GET /api/auth/csrf': { summary: 'A CSRF token for this browser session', description: 'Browser sessions send it as X-CSRF-Token on every changing request; API tokens need none.', responseDescription: '`{ csrfToken }`' },
+  'GET /api/auth/me': { summary: 'The caller and their workspaces with roles', description: 'With an API token: the token’s workspace only, with the token’s role.', response: meResponseSchema },
+  'POST /api/auth/sign-in': { summary: 'Sign in with e-mail and password (starts a session)', response: meResponseSchema },
+  'POST /api/auth/register': { summary: 'Create an account and its workspace, or join from an invitation', status: 201, response: meResponseSchema },
+  'POST /api/auth/sign-out': { summary: 'End the session', status: 204, responseDescription: 'Signed out.' },
+  'POST /api/auth/password-reset': { summary: 'Send a password-reset link by e-mail', status: 202, responseDescription: 'Accepted; the same answer whether or not an account uses the address.' },
+  'POST /api/auth/password-reset/{token}': { summary: 'Choose a new password with a reset link', status: 204, responseDescription: 'Password changed.' },
+})

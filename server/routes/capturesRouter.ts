@@ -10,6 +10,8 @@ import type { AnalysisQueue } from '../queue/analysisQueue'
 import type { ObjectStore } from '../storage/createObjectStore'
 import type { IncomingUpload } from '../storage/incomingUploadStorage'
 import { discardUploads } from '../storage/commitUploads'
+import { documentRoutes } from '../openapi/routeDocs'
+import { analysisResponseSchema, captureResponseSchema } from '../openapi/responseSchemas'
 
 const surveyParams = z.object({ surveyId: idParam })
 const captureParams = z.object({ captureId: idParam })
@@ -43,3 +45,24 @@ export function capturesRouter(context: { store: ObjectStore; uploadLimitMb: num
   router.delete('/captures/:captureId', requireAuth, validate({ params: captureParams }), captures.remove(context.store))
   return router
 }
+
+documentRoutes('Captures', {
+  'GET /api/surveys/{surveyId}/captures': { summary: 'The captures of a survey, with their status and headline values', response: z.array(captureResponseSchema) },
+  'POST /api/surveys/{surveyId}/captures': {
+    summary: 'Upload a capture (WAV) and queue its analysis',
+    description: 'Poll `GET /api/captures/{captureId}` until its status is `done` or `failed`, then read the analysis.',
+    status: 202,
+    response: captureResponseSchema,
+    responseDescription: 'Stored and queued for analysis.',
+    multipart: {
+      fields: createCaptureFieldsSchema,
+      files: {
+        file: { description: 'The impulse response or sweep recording, WAV.', contentType: 'audio/wav', isRequired: true },
+        reference: { description: 'The reference sweep a sweep recording was made with, WAV.', contentType: 'audio/wav', isRequired: false },
+      },
+    },
+  },
+  'GET /api/captures/{captureId}': { summary: 'One capture with its analysis status', response: captureResponseSchema },
+  'GET /api/captures/{captureId}/analysis': { summary: 'The newest analysis of a capture (or the one asked for)', response: analysisResponseSchema },
+  'DELETE /api/captures/{captureId}': { summary: 'Delete a capture and its analyses', status: 204, responseDescription: 'Deleted.' },
+})

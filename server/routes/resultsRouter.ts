@@ -6,6 +6,7 @@ import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
 import { bandResolutionQuerySchema, comparisonQuerySchema, reanalyseBodySchema, sweepQuerySchema } from '../../shared/api/results'
 import type { AnalysisQueue } from '../queue/analysisQueue'
+import { documentRoutes } from '../openapi/routeDocs'
 
 const surveyParams = z.object({ surveyId: idParam })
 const roomParams = z.object({ roomId: idParam })
@@ -25,3 +26,14 @@ export function resultsRouter(context: { queue: AnalysisQueue }) {
   router.get('/test-signal/sweep.wav', validate({ query: sweepQuerySchema }), results.sweepWav)
   return router
 }
+
+documentRoutes('Results', {
+  'GET /api/surveys/{surveyId}/summary': { summary: 'Spatial averages of a survey’s positions per band, judged for reliability' },
+  'GET /api/surveys/{surveyId}/export': { summary: 'A survey’s band values as CSV or JSON', contentType: 'text/csv' },
+  'GET /api/rooms/{roomId}/comparison': { summary: 'Two or more surveys compared per band against the room’s target' },
+  'GET /api/rooms/{roomId}/comparison/export': { summary: 'A comparison as CSV or JSON', contentType: 'text/csv' },
+  'GET /api/captures/{captureId}/export': { summary: 'A capture’s band values as CSV or JSON', contentType: 'text/csv' },
+  'GET /api/captures/{captureId}/analyses': { summary: 'Every analysis of a capture with its settings' },
+  'POST /api/captures/{captureId}/analyses': { summary: 'Analyse a capture again with other settings', status: 202, responseDescription: 'Queued (202), or the existing analysis with these settings (200).' },
+  'GET /api/test-signal/sweep.wav': { summary: 'A test sweep as WAV (play it quietly first: test signals can be loud)', contentType: 'audio/wav' },
+})

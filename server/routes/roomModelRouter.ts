@@ -5,6 +5,7 @@ import { validate } from '../middleware/validate'
 import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
 import { customMaterialBodySchema, layoutBodySchema, treatmentBodySchema } from '../../shared/api/roomModel'
+import { documentRoutes } from '../openapi/routeDocs'
 
 const roomParams = z.object({ roomId: idParam })
 const workspaceParams = z.object({ workspaceId: idParam })
@@ -21,3 +22,12 @@ export function roomModelRouter() {
   router.delete('/workspaces/:workspaceId/materials/:materialId', requireAuth, validate({ params: materialParams }), roomModel.deleteMaterial)
   return router
 }
+
+documentRoutes('Room model', {
+  'GET /api/rooms/{roomId}/model': { summary: 'The room model: layout, treatment plan and what follows from them' },
+  'PUT /api/rooms/{roomId}/model/layout': { summary: 'Save the speaker and listener layout' },
+  'PUT /api/rooms/{roomId}/model/treatment': { summary: 'Save the treatment plan' },
+  'GET /api/workspaces/{workspaceId}/materials': { summary: 'The workspace’s own absorber materials' },
+  'POST /api/workspaces/{workspaceId}/materials': { summary: 'Add a material with its absorption per band', status: 201 },
+  'DELETE /api/workspaces/{workspaceId}/materials/{materialId}': { summary: 'Delete a material', status: 204, responseDescription: 'Deleted.' },
+})

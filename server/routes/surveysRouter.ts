@@ -6,6 +6,8 @@ import { requireAuth } from '../middleware/requireAuth'
 import { idParam } from '../../shared/api/common'
 import { updateSurveyBodySchema } from '../../shared/api/surveys'
 import type { ObjectStore } from '../storage/createObjectStore'
+import { documentRoutes } from '../openapi/routeDocs'
+import { surveyResponseSchema } from '../openapi/responseSchemas'
 
 const surveyParams = z.object({ surveyId: idParam })
 
@@ -17,3 +19,9 @@ export function surveysRouter(context: { store: ObjectStore }) {
   router.delete('/:surveyId', validate({ params: surveyParams }), surveys.remove(context.store))
   return router
 }
+
+documentRoutes('Surveys', {
+  'GET /api/surveys/{surveyId}': { summary: 'One survey', response: surveyResponseSchema },
+  'PATCH /api/surveys/{surveyId}': { summary: 'Change a survey', response: surveyResponseSchema },
+  'DELETE /api/surveys/{surveyId}': { summary: 'Delete a survey and its captures', status: 204, responseDescription: 'Deleted.' },
+})

@@ -1,6 +1,7 @@
 import { Activity, User } from '../models'
 import { requireRoomAccess } from '../policy/roomAccess'
 import type { ActivityDto } from '../../shared/api/invitations'
+import { currentTokenScope } from '../auth/actingScope'
 
 export interface ActivityEntry {
   workspaceId: number
@@ -8,11 +9,20 @@ export interface ActivityEntry {
   userId: number | null
   action: string
   summary: string
+  /** Set by token management itself; otherwise taken from the request's API token, if any. */
+  apiTokenId?: number | null
 }
 
-/** Appends one line to the trail. A failure to record never fails the action it describes. */
+/**
+ * Appends one line to the trail. An action taken with an API token names the token, so the trail
+ * tells a person's own clicks from their scripts. A failure to record never fails the action.
+ */
 export async function recordActivity(entry: ActivityEntry): Promise<void> {
-  await Activity.create(entry).catch(() => undefined)
+  const scope = currentTokenScope()
+  const viaToken = scope !== null && scope.userId === entry.userId && entry.apiTokenId === undefined
+  const summary = viaToken ? `${entry.summary} (with the API token "${scope.tokenName}")` : entry.summary
+  const apiTokenId = viaToken ? scope.tokenId : (entry.apiTokenId ?? null)
+  await Activity.create({ ...entry, summary: summary.slice(0, 500), apiTokenId }).catch(() => undefined)
 }
 
 /** A room's trail, newest first (the last 200 lines). */

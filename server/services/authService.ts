@@ -3,6 +3,7 @@ import type { Sequelize } from 'sequelize'
 import { Membership, User, Workspace } from '../models'
 import { ConflictError } from '../errors'
 import type { MeResponse, RegisterBody, UserDto } from '../../shared/api/auth'
+import { actingRole } from '../auth/actingScope'
 
 /** bcrypt cost 12 ≈ 0.25 s per hash here: slow enough for stored passwords, fast enough to sign in. */
 const BCRYPT_COST = process.env.NODE_ENV === 'test' ? 4 : 12
@@ -15,7 +16,7 @@ export function toUserDto(user: User): UserDto {
   return { id: user.id, name: user.name, email: user.email }
 }
 
-/** The signed-in user and their workspaces with roles. */
+/** The signed-in user and their workspaces with roles (with an API token: its workspace and role only). */
 export async function describeUser(userId: number): Promise<MeResponse | null> {
   const user = await User.findByPk(userId)
   if (!user) return null
@@ -26,7 +27,10 @@ export async function describeUser(userId: number): Promise<MeResponse | null> {
   })
   return {
     user: toUserDto(user),
-    memberships: memberships.map((m) => ({ workspaceId: m.workspaceId, workspaceName: m.workspace?.name ?? '', role: m.role })),
+    memberships: memberships.flatMap((m) => {
+      const role = actingRole(userId, m.workspaceId, m.role)
+      return role ? [{ workspaceId: m.workspaceId, workspaceName: m.workspace?.name ?? '', role }] : []
+    }),
   }
 }
 

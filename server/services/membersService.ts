@@ -2,6 +2,7 @@ import { Membership, User } from '../models'
 import { ConflictError, NotFoundError, ValidationError } from '../errors'
 import { requireWorkspaceRole } from '../policy/roomAccess'
 import type { AddMemberBody, MemberDto, UpdateMemberBody } from '../../shared/api/members'
+import { limitMemberTokens, revokeMemberTokens } from './apiTokensService'
 
 function toMemberDto(membership: Membership): MemberDto {
   const user = membership.user!
@@ -48,6 +49,7 @@ export async function updateMember(userId: number, workspaceId: number, targetUs
   const membership = await findTarget(workspaceId, targetUserId)
   if (body.role !== 'owner') await assertNotLastOwner(workspaceId, membership)
   await membership.update({ role: body.role })
+  await limitMemberTokens(workspaceId, targetUserId, body.role, userId)
   return toMemberDto(membership)
 }
 
@@ -56,4 +58,5 @@ export async function removeMember(userId: number, workspaceId: number, targetUs
   const membership = await findTarget(workspaceId, targetUserId)
   await assertNotLastOwner(workspaceId, membership)
   await membership.destroy()
+  await revokeMemberTokens(workspaceId, targetUserId, userId)
 }

@@ -40,6 +40,8 @@ export const router = createRouter({
     { path: '/shared/:token', name: 'shared', component: () => import('@/views/SharedComparisonView.vue'), props: tokenProp, meta: { access: 'any', title: 'Shared report' } },
     { path: '/dev/mailbox', name: 'dev-mailbox', component: () => import('@/views/DevMailboxView.vue'), meta: { access: 'any', title: 'Mailbox (this machine)' } },
     { path: '/workspace/profile', name: 'workspace-profile', component: () => import('@/views/WorkspaceProfileView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Report profile' } },
+    { path: '/settings', name: 'settings', component: () => import('@/views/SettingsView.vue'), meta: { title: 'Settings' } },
+    { path: '/api-reference', name: 'api-reference', component: () => import('@/views/ApiReferenceView.vue'), meta: { access: 'any', title: 'API reference' } },
     { path: '/workspace/members', name: 'members', component: () => import('@/views/MembersView.vue'), meta: { roles: ROOM_MANAGERS, title: 'Members' } },
     { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { access: 'any', title: 'Page not found' } },
   ],
