@@ -47,10 +47,13 @@ export function capturesRouter(context: { store: ObjectStore; uploadLimitMb: num
 }
 
 documentRoutes('Captures', {
-  'GET /api/surveys/{surveyId}/captures': { summary: 'The captures of a survey, with their status and headline values', response: z.array(captureResponseSchema) },
+  'GET /api/surveys/{surveyId}/captures': {
+    summary: 'One page of a survey’s captures, with their status and headline values',
+    response: z.object({ items: z.array(captureResponseSchema), total: z.number().int(), page: z.number().int(), pageSize: z.number().int() }),
+  },
   'POST /api/surveys/{surveyId}/captures': {
     summary: 'Upload a capture (WAV) and queue its analysis',
-    description: 'Poll `GET /api/captures/{captureId}` until its status is `done` or `failed`, then read the analysis.',
+    description: 'Follow `GET /api/surveys/{surveyId}/events`, or poll `GET /api/captures/{captureId}`, until its status is `done` or `failed`, then read the analysis.',
     status: 202,
     response: captureResponseSchema,
     responseDescription: 'Stored and queued for analysis.',

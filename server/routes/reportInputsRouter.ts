@@ -1,3 +1,5 @@
+import { documentRoutes } from '../openapi/routeDocs'
+import { captureResponseSchema } from '../openapi/responseSchemas'
 import express, { Router } from 'express'
 import { z } from 'zod'
 import * as inputs from '../controllers/reportInputsController'
@@ -48,3 +50,24 @@ export function reportInputsRouter(context: { queue: AnalysisQueue }) {
   router.delete('/workspaces/:workspaceId/profile/logo', requireAuth, validate({ params: workspaceParams }), settings.removeLogo)
   return router
 }
+
+documentRoutes('Reports', {
+  'PUT /api/captures/{captureId}/inclusion': { summary: 'Include a capture in its survey average, or leave it out with a reason (owners, engineers)', response: captureResponseSchema },
+  'PUT /api/captures/{captureId}/pinned-analysis': { summary: 'Pin the analysis used for reporting; null goes back to the default rule (owners, engineers)', response: captureResponseSchema },
+  'POST /api/surveys/{surveyId}/analyses': { summary: 'Analyse the whole survey with these settings (they become the survey’s)', status: 202 },
+  'GET /api/surveys/{surveyId}/analysis-progress': { summary: 'How many captures of the survey are analysed with its settings, pending or failed' },
+  'PUT /api/rooms/{roomId}/target': { summary: 'Choose the room’s target (a published one or a custom target of the workspace)' },
+  'GET /api/rooms/{roomId}/report-revisions': { summary: 'The room’s report revisions: sent ones with their dates, and the draft' },
+  'GET /api/rooms/{roomId}/report-revisions/{revisionId}': { summary: 'One report revision with its frozen snapshot' },
+  'GET /api/rooms/{roomId}/report-revisions/{revisionId}/report.pdf': { summary: 'The PDF of a report revision, as it was sent', contentType: 'application/pdf' },
+  'GET /api/workspaces/{workspaceId}/custom-targets': { summary: 'The workspace’s custom targets' },
+  'POST /api/workspaces/{workspaceId}/custom-targets': { summary: 'Define a custom target (name, limits per band, source note)', status: 201 },
+  'PUT /api/workspaces/{workspaceId}/custom-targets/{targetId}': { summary: 'Change a custom target' },
+  'DELETE /api/workspaces/{workspaceId}/custom-targets/{targetId}': { summary: 'Delete a custom target no room uses', status: 204, responseDescription: 'Deleted.' },
+  'GET /api/workspaces/{workspaceId}/target-options': { summary: 'Every target a room of the workspace may choose, published and custom' },
+  'GET /api/workspaces/{workspaceId}/profile': { summary: 'The consultancy profile printed on reports' },
+  'PUT /api/workspaces/{workspaceId}/profile': { summary: 'Change the consultancy profile (owners)' },
+  'GET /api/workspaces/{workspaceId}/profile/logo': { summary: 'The profile’s logo image', contentType: 'image/png' },
+  'PUT /api/workspaces/{workspaceId}/profile/logo': { summary: 'Upload the profile’s logo (the request body is the PNG or JPEG image)' },
+  'DELETE /api/workspaces/{workspaceId}/profile/logo': { summary: 'Remove the profile’s logo', status: 204, responseDescription: 'Removed.' },
+})

@@ -1,3 +1,4 @@
+import { documentRoutes } from '../openapi/routeDocs'
 import { Router } from 'express'
 import { z } from 'zod'
 import * as surveyEvents from '../controllers/surveyEventsController'
@@ -14,3 +15,10 @@ export function surveyEventsRouter(hub: SurveyEventHub) {
   router.get('/surveys/:surveyId/events', requireAuth, validate({ params: surveyParams }), surveyEvents.stream(hub))
   return router
 }
+
+documentRoutes('Surveys', {
+  'GET /api/surveys/{surveyId}/events': {
+    summary: 'Live status of the survey’s captures (server-sent events: ready, capture, capture-deleted, resync)',
+    contentType: 'text/event-stream',
+  },
+})
