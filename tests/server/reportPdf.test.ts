@@ -55,7 +55,7 @@ beforeAll(async () => {
   longBefore = await createAnalysedSurvey(longRoom, { name: LONG_BEFORE, t60S: 0.6, positions: 2, store: services.store, seed: 101 })
   longAfter = await createAnalysedSurvey(longRoom, { name: LONG_AFTER, t60S: 0.2, positions: 2, store: services.store, seed: 111 })
   await addAnalysedCapture(longAfter, { t60S: 0.9, seed: 121, store: services.store, label: 'Doorway, a position with a very long label that has to wrap in its table cell' })
-  const doorway = (await owner.get(`/api/surveys/${longAfter.id}/captures`)).body.find((c: { receiverLabel: string }) => c.receiverLabel.startsWith('Doorway'))
+  const doorway = (await owner.get(`/api/surveys/${longAfter.id}/captures`)).body.items.find((c: { receiverLabel: string }) => c.receiverLabel.startsWith('Doorway'))
   await owner.put(`/api/captures/${doorway.id}/inclusion`, { isIncluded: false, reason: 'Next to the open door: not a listening position' })
   scriptRoom = await Room.create({ workspaceId: a.workspace.id, name: ROOM_POLISH, clientName: CLIENT_GREEK, address: 'ul. Piotrkowska 1, Łódź', use: 'control-room', lengthM: 5, widthM: 4, heightM: 2.5, volumeM3: null })
   scriptBefore = await createAnalysedSurvey(scriptRoom, { name: SURVEY_CYRILLIC, t60S: 0.6, positions: 2, store: services.store, seed: 131 })

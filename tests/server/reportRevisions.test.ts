@@ -131,7 +131,7 @@ describe('including and excluding positions', () => {
 
     const activity = (await engineer.get(`/api/rooms/${room.id}/activity`)).body as { action: string; summary: string }[]
     expect(activity.find((entry) => entry.action === 'capture.excluded')?.summary).toBe('excluded Doorway from the average of “After panels”: Next to the open door')
-    const listed = (await viewer.get(`/api/surveys/${after.id}/captures`)).body.find((c: { id: number }) => c.id === badPosition.id)
+    const listed = (await viewer.get(`/api/surveys/${after.id}/captures`)).body.items.find((c: { id: number }) => c.id === badPosition.id)
     expect(listed).toMatchObject({ isExcluded: true, exclusionReason: 'Next to the open door' })
   })
 })
@@ -149,7 +149,7 @@ describe('analyses: who may start them and which one counts', () => {
   })
 
   it('keeps the capture page and export on the pinned analysis after a re-analysis, until it is re-pinned', async () => {
-    const capture = (await engineer.get(`/api/surveys/${before.id}/captures`)).body[0] as { id: number }
+    const capture = (await engineer.get(`/api/surveys/${before.id}/captures`)).body.items[0] as { id: number }
     const first = (await engineer.get(`/api/captures/${capture.id}/analysis`)).body
     expect(first).toMatchObject({ isCounting: true, isPinned: false })
     const settings = { ...DEFAULT_ANALYSIS_SETTINGS, smoothing: 12 as const }
@@ -190,7 +190,7 @@ describe('sent reports are frozen revisions', () => {
     const uploaded = await uploadAs(client, after.id, synthesizedRoomWav({ t60S: 0.9, seed: 91 }), 'Client corner')
     expect(uploaded.status).toBe(202)
     await analyseInProcess(uploaded.body.id, services.store, settingsToKey({ ...DEFAULT_ANALYSIS_SETTINGS, channel: 0 }))
-    const someCapture = (await engineer.get(`/api/surveys/${after.id}/captures`)).body[0] as { id: number }
+    const someCapture = (await engineer.get(`/api/surveys/${after.id}/captures`)).body.items[0] as { id: number }
     const third = { ...DEFAULT_ANALYSIS_SETTINGS, bands: 'third' as const }
     expect((await engineer.post(`/api/captures/${someCapture.id}/analyses`, third)).status).toBe(202)
     await analyseInProcess(someCapture.id, services.store, settingsToKey(third))
@@ -288,7 +288,7 @@ describe('analysing the whole survey with other settings', () => {
     expect(run.status).toBe(202)
     expect(run.body).toMatchObject({ total: 3, queued: 3, alreadyAnalysed: 0 })
     expect((await engineer.get(`/api/surveys/${before.id}/analysis-progress`)).body).toMatchObject({ total: 3, done: 0, pending: 3, failed: 0 })
-    const captures = (await engineer.get(`/api/surveys/${before.id}/captures`)).body as { id: number }[]
+    const captures = (await engineer.get(`/api/surveys/${before.id}/captures`)).body.items as { id: number }[]
     for (const capture of captures) await analyseInProcess(capture.id, services.store, settingsToKey({ ...(settings as typeof DEFAULT_ANALYSIS_SETTINGS), channel: 0 }))
     expect((await engineer.get(`/api/surveys/${before.id}/analysis-progress`)).body).toMatchObject({ total: 3, done: 3, pending: 0 })
     expect((await engineer.post(`/api/surveys/${before.id}/analyses`, settings)).body).toMatchObject({ queued: 0, alreadyAnalysed: 3 })
