@@ -38,7 +38,7 @@ export async function up(qi: QueryInterface): Promise<void> {
 export async function down(qi: QueryInterface): Promise<void> {
   await qi.sequelize.query('DROP TRIGGER IF EXISTS captures_queue_content_release ON captures')
   await qi.sequelize.query('DROP FUNCTION IF EXISTS queue_content_release()')
-  await qi.dropTable('content_releases')
+  await qi.dropTable('content_releases', {})
   await qi.removeIndex('captures', ['reference_sha256'])
   await qi.removeIndex('captures', ['sha256'])
 }

@@ -31,6 +31,6 @@ export async function up(qi: QueryInterface): Promise<void> {
 }
 
 export async function down(qi: QueryInterface): Promise<void> {
-  await qi.dropTable('workspace_profiles')
-  await qi.dropTable('custom_targets')
+  await qi.dropTable('workspace_profiles', {})
+  await qi.dropTable('custom_targets', {})
 }

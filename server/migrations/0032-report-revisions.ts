@@ -30,5 +30,5 @@ export async function up(qi: QueryInterface): Promise<void> {
 
 export async function down(qi: QueryInterface): Promise<void> {
   await qi.removeColumn('share_links', 'report_revision_id')
-  await qi.dropTable('report_revisions')
+  await qi.dropTable('report_revisions', {})
 }

@@ -33,6 +33,6 @@ export async function up(qi: QueryInterface): Promise<void> {
 
 export async function down(qi: QueryInterface): Promise<void> {
   await qi.removeColumn('activities', 'api_token_id')
-  await qi.dropTable('api_tokens')
+  await qi.dropTable('api_tokens', {})
   await qi.sequelize.query('DROP TYPE IF EXISTS "enum_api_tokens_role"')
 }
