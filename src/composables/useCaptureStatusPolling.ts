@@ -126,6 +126,11 @@ export function useCaptureStatusPolling(surveyId: Ref<number>, options: { pageSi
     if (isCapturePending(capture) && !events.isConnected.value) poller.start()
   }
 
+  /** Replaces a listed capture by a fresher copy the page got itself (e.g. after excluding it). */
+  function replace(capture: CaptureListItem): void {
+    upsert(capture)
+  }
+
   /** Drops a deleted capture (called by the page after its own delete, and by the stream). */
   function forget(captureId: number): void {
     if (forgotten.has(captureId)) return
@@ -185,6 +190,7 @@ export function useCaptureStatusPolling(surveyId: Ref<number>, options: { pageSi
     isLive: events.isConnected,
     load,
     track,
+    replace,
     forget,
     showPage,
     isPolling: () => poller.isActive(),
