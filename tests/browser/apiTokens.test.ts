@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Browser, Page } from 'playwright-core'
+import { signInThroughPage } from '../helpers/signIn'
 import { launchChromium, screenshotPath } from '../helpers/browser'
 import { startRunningApp, type RunningApp } from '../helpers/runningApp'
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
+import { DEMO_ACCOUNTS } from '../../server/db/demoData'
 
 let running: RunningApp
 let browser: Browser
@@ -23,11 +24,7 @@ afterAll(async () => {
 describe('API tokens and the API reference in Chromium', () => {
   it('creates a token on the settings page, shows it once, and the token reaches the API', async () => {
     const engineer = DEMO_ACCOUNTS.find((account) => account.role === 'engineer')!
-    await page.goto(`${running.baseUrl}/sign-in`)
-    await page.getByTestId('sign-in-email').locator('input').fill(engineer.email)
-    await page.getByTestId('sign-in-password').locator('input').fill(DEMO_PASSWORD)
-    await page.getByTestId('sign-in-submit').click()
-    await page.waitForURL(/\/rooms/)
+    await signInThroughPage(page, running.baseUrl, engineer.email)
     await page.getByTestId('user-menu').click()
     await page.getByTestId('settings-link').click()
     await page.waitForURL(/\/settings/)

@@ -4,8 +4,9 @@ import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { chromium, type Browser, type Page } from 'playwright-core'
 import { screenshotPath } from '../helpers/browser'
+import { signInThroughPage } from '../helpers/signIn'
 import { startRunningApp, type RunningApp } from '../helpers/runningApp'
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
+import { DEMO_ACCOUNTS } from '../../server/db/demoData'
 import { Analysis, Capture, Room, Survey } from '../../server/models'
 import { generateSweep } from '../../shared/acoustics/sweep/generateSweep'
 import { fftConvolve } from '../../shared/acoustics/fft/fftConvolve'
@@ -60,11 +61,7 @@ beforeAll(async () => {
   })
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, permissions: ['microphone'] })
   page = await context.newPage()
-  await page.goto(`${running.baseUrl}/sign-in`)
-  await page.getByTestId('sign-in-email').locator('input').fill(DEMO_ACCOUNTS[1]!.email)
-  await page.getByTestId('sign-in-password').locator('input').fill(DEMO_PASSWORD)
-  await page.getByTestId('sign-in-submit').click()
-  await page.waitForURL(/\/rooms/)
+  await signInThroughPage(page, running.baseUrl, DEMO_ACCOUNTS[1]!.email)
 }, 120_000)
 afterAll(async () => {
   await browser?.close()

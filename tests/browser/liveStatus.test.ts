@@ -3,10 +3,11 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import type { Browser, Page } from 'playwright-core'
+import { signInThroughPage } from '../helpers/signIn'
 import { launchChromium, screenshotPath } from '../helpers/browser'
 import { startRunningApp, type RunningApp } from '../helpers/runningApp'
 import { decayingNoiseWav } from '../helpers/wavFixtures'
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
+import { DEMO_ACCOUNTS } from '../../server/db/demoData'
 import { Room, Survey } from '../../server/models'
 
 // The survey page follows an upload through the live status stream: the status column moves
@@ -22,11 +23,7 @@ beforeAll(async () => {
   scratch = await mkdtemp(path.join(tmpdir(), 'ringdown-live-'))
   browser = await launchChromium()
   page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
-  await page.goto(`${running.baseUrl}/sign-in`)
-  await page.getByTestId('sign-in-email').locator('input').fill(DEMO_ACCOUNTS[0]!.email)
-  await page.getByTestId('sign-in-password').locator('input').fill(DEMO_PASSWORD)
-  await page.getByTestId('sign-in-submit').click()
-  await page.waitForURL(/\/rooms/)
+  await signInThroughPage(page, running.baseUrl, DEMO_ACCOUNTS[0]!.email)
 })
 afterAll(async () => {
   await browser?.close()

@@ -1,9 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import path from 'node:path'
 import type { Browser, Page } from 'playwright-core'
+import { signInThroughPage } from '../helpers/signIn'
 import { launchChromium, screenshotPath } from '../helpers/browser'
 import { startRunningApp, type RunningApp } from '../helpers/runningApp'
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
+import { DEMO_ACCOUNTS } from '../../server/db/demoData'
 import { Analysis, Capture, Room, Survey } from '../../server/models'
 import { createSmtpMailer } from '../../server/mail/mailer'
 import { readFakeInbox, startFakeSmtpInbox } from '../../server/mail/fakeSmtpInbox'
@@ -25,11 +26,7 @@ beforeAll(async () => {
   page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
   room = (await Room.findOne({ where: { name: 'Garden studio control room' } }))!
   surveys = await Survey.findAll({ where: { roomId: room.id }, order: [['measuredOn', 'ASC']] })
-  await page.goto(`${running.baseUrl}/sign-in`)
-  await page.getByTestId('sign-in-email').locator('input').fill(DEMO_ACCOUNTS[0]!.email)
-  await page.getByTestId('sign-in-password').locator('input').fill(DEMO_PASSWORD)
-  await page.getByTestId('sign-in-submit').click()
-  await page.waitForURL(/\/rooms/)
+  await signInThroughPage(page, running.baseUrl, DEMO_ACCOUNTS[0]!.email)
 })
 afterAll(async () => {
   await browser?.close()

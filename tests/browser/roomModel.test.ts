@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Browser, Page } from 'playwright-core'
+import { signInThroughPage } from '../helpers/signIn'
 import { launchChromium, screenshotPath } from '../helpers/browser'
 import { startRunningApp, type RunningApp } from '../helpers/runningApp'
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/demoData'
+import { DEMO_ACCOUNTS } from '../../server/db/demoData'
 import { Room } from '../../server/models'
 
 let running: RunningApp
@@ -13,11 +14,7 @@ beforeAll(async () => {
   running = await startRunningApp()
   browser = await launchChromium()
   page = await browser.newPage({ viewport: { width: 1280, height: 900 } })
-  await page.goto(`${running.baseUrl}/sign-in`)
-  await page.getByTestId('sign-in-email').locator('input').fill(DEMO_ACCOUNTS[1]!.email)
-  await page.getByTestId('sign-in-password').locator('input').fill(DEMO_PASSWORD)
-  await page.getByTestId('sign-in-submit').click()
-  await page.waitForURL(/\/rooms/)
+  await signInThroughPage(page, running.baseUrl, DEMO_ACCOUNTS[1]!.email)
 })
 afterAll(async () => {
   await browser?.close()
