@@ -54,6 +54,17 @@ export default defineConfig({
           hookTimeout: 120_000,
         },
       },
+      {
+        extends: true,
+        test: {
+          name: 'start',
+          include: ['tests/start/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 600_000,
+          hookTimeout: 120_000,
+        },
+      },
     ],
   },
 })

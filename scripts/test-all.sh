@@ -33,5 +33,7 @@ echo "ringdown: building the client for the browser tests"
 npm run --silent build >/dev/null
 echo "ringdown: browser tests (Chromium)"
 npx vitest run --project browser --reporter=default --reporter=json --outputFile.json="$RINGDOWN_DATA_DIR/results-browser.json"
+echo "ringdown: the start command from a fresh clone"
+npx vitest run --project start --reporter=default --reporter=json --outputFile.json="$RINGDOWN_DATA_DIR/results-start.json"
 echo "ringdown: all suites passed"
 node scripts/sumTestResults.mjs "$RINGDOWN_DATA_DIR"/results-*.json

@@ -2,6 +2,7 @@ import express, { type Express } from 'express'
 import session from 'express-session'
 import connectPgSimple from 'connect-pg-simple'
 import helmet from 'helmet'
+import compression from 'compression'
 import { pinoHttp } from 'pino-http'
 import pg from 'pg'
 import { csrfSync } from 'csrf-sync'
@@ -103,6 +104,8 @@ export function createApp({
         serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
       }),
     )
+  // Live status streams must not be buffered by the compressor.
+  app.use(compression({ filter: (req, res) => req.headers.accept !== 'text/event-stream' && compression.filter(req, res) }))
   app.use(express.json({ limit: '1mb' }))
 
   const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 })
@@ -155,8 +158,11 @@ export function createApp({
   app.use('/api', notFoundHandler)
 
   if (existsSync(path.join(clientDir, 'index.html'))) {
+    // Files under assets/ carry a content hash in their names: cache them for a year; index.html
+    // names the current hashes, so it is always revalidated.
+    app.use('/assets', express.static(path.join(clientDir, 'assets'), { index: false, maxAge: '1y', immutable: true }))
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
-    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')))
+    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } }))
   }
   app.use(errorHandler)
   return { app, queue, store, events, close: async () => { mailer.close(); await Promise.allSettled([events.close(), sessionPool.end(), queue.close()]) } }

@@ -40,11 +40,18 @@ async function shutdown(signal: string) {
   logger.info({ signal }, 'shutting down')
   clearInterval(requeueTimer)
   storageHousekeeping.stop()
-  server.close()
+  // Stop accepting, let in-flight requests finish (a few seconds at most), then close the pools.
+  const drained = new Promise<void>((resolve) => server.close(() => resolve()))
+  server.closeIdleConnections()
+  await Promise.race([drained, new Promise((resolve) => setTimeout(resolve, 5000))])
   server.closeAllConnections()
   await Promise.allSettled([close(), sequelize.close(), redis.quit(), fakeInbox?.close()])
   store.close()
   process.exit(0)
 }
+process.on('unhandledRejection', (reason) => {
+  logger.error({ err: reason }, 'unhandled rejection in the server; exiting so the start command restarts it')
+  process.exit(1)
+})
 process.on('SIGTERM', () => void shutdown('SIGTERM'))
 process.on('SIGINT', () => void shutdown('SIGINT'))

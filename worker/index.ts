@@ -29,12 +29,27 @@ worker.on('completed', (job) => logger.info({ jobId: job.id, captureId: job.data
 worker.on('failed', (job, error) => logger.warn({ jobId: job?.id, err: error }, 'analysis failed'))
 worker.on('error', (error) => logger.error({ err: error }, 'worker error'))
 
+// Closing waits for the job in hand, but with Redis gone it would wait for ever: give it a time
+// limit, then exit anyway (BullMQ hands a stalled job to another worker).
+const CLOSE_LIMIT_MS = 8000
+let isStopping = false
 async function shutdown(signal: string) {
+  if (isStopping) return
+  isStopping = true
   logger.info({ signal }, 'worker stopping after the job in hand')
-  await worker.close()
+  setTimeout(() => {
+    logger.warn({ limitMs: CLOSE_LIMIT_MS }, 'worker did not close in time; exiting')
+    process.exit(0)
+  }, CLOSE_LIMIT_MS)
+  await worker.close().catch((error: unknown) => logger.warn({ err: error }, 'worker close failed'))
   store.close()
-  await Promise.allSettled([connection.quit(), sequelize.close()])
+  connection.disconnect()
+  await Promise.allSettled([sequelize.close()])
   process.exit(0)
 }
+process.on('unhandledRejection', (reason) => {
+  logger.error({ err: reason }, 'unhandled rejection in the worker; exiting so the start command restarts it')
+  process.exit(1)
+})
 process.on('SIGTERM', () => void shutdown('SIGTERM'))
 process.on('SIGINT', () => void shutdown('SIGINT'))

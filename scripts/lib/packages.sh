@@ -45,6 +45,6 @@ ensure_browser_packages() {
 ensure_node_modules() {
   if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
     echo "ringdown: installing npm packages (npm ci)"
-    npm ci --no-fund --no-audit --loglevel=error
+    npm ci --include=dev --no-fund --no-audit --loglevel=error
   fi
 }
