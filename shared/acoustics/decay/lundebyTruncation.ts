@@ -72,7 +72,9 @@ export function lundebyTruncation(energy: Float64Array, suffixEnergy: Float64Arr
   let noiseDb = 10 * Math.log10(Math.max(noisePower, 1e-300))
   let levels = windowLevels(suffixEnergy, Math.max(1, Math.round(initialWindowS * sampleRateHz)), sampleRateHz)
   const aborted: LundebyResult = { truncationSample: sampleCount, tailEnergy: 0, noisePower, lateDecayDbPerS: null, isReliable: false, iterations: 0 }
-  const peakDb = Math.max(...levels.levelDb)
+  // A loop, not Math.max(...levels): a long recording has more windows than the call stack holds.
+  let peakDb = -Infinity
+  for (const level of levels.levelDb) if (level > peakDb) peakDb = level
   let fit = fitWindows(levels, rangeBetween(levels, Infinity, noiseDb + MARGIN_ABOVE_NOISE_DB), 2)
   if (!fit || peakDb - noiseDb < 2 * MARGIN_ABOVE_NOISE_DB) return aborted
   let crossS = Math.min(durationS, (noiseDb - fit.intercept) / fit.slope)
