@@ -108,7 +108,11 @@ export function createApp({
   app.use(compression({ filter: (req, res) => req.headers.accept !== 'text/event-stream' && compression.filter(req, res) }))
   app.use(express.json({ limit: '1mb' }))
 
-  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 })
+  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, application_name: 'ringdown-sessions' })
+  // An idle client whose backend goes away (database restart, pg_terminate_backend) makes the pool
+  // emit 'error'; unhandled, that event ends the process. The pool has already dropped the client
+  // and opens a new one for the next request, so logging is all that is left to do.
+  sessionPool.on('error', (error) => logger.warn({ err: error }, 'session store lost an idle database connection'))
   const PgStore = connectPgSimple(session)
   app.use(
     session({
