@@ -61,7 +61,7 @@ export async function processAnalysisJob(job: ProgressJob, context: ProcessorCon
         : {}),
       ...(referenceSweep ? { referenceSweep } : {}),
     })
-    result.warnings.push(...decoded.warnings)
+    for (const warning of decoded.warnings) result.warnings.push(warning)
     await job.updateProgress({ stage: 'storing', percent: 90 })
     await recordResult(analysis, result)
     await job.updateProgress({ stage: 'done', percent: 100 })

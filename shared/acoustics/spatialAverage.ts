@@ -28,7 +28,7 @@ function spreadOf(values: number[]): ParameterSpread {
   if (count === 0) return { mean: null, standardDeviation: null, min: null, max: null, count }
   const mean = values.reduce((sum, value) => sum + value, 0) / count
   const variance = count > 1 ? values.reduce((sum, value) => sum + (value - mean) ** 2, 0) / (count - 1) : null
-  return { mean, standardDeviation: variance === null ? null : Math.sqrt(variance), min: Math.min(...values), max: Math.max(...values), count }
+  return { mean, standardDeviation: variance === null ? null : Math.sqrt(variance), min: values.reduce((low, value) => Math.min(low, value)), max: values.reduce((high, value) => Math.max(high, value)), count }
 }
 
 /**

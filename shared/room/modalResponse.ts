@@ -48,7 +48,7 @@ export function modalResponse(options: ModalResponseOptions): ModalResponse {
   sources.forEach((source, i) => assertPointInRoom(source, room, `source ${i + 1}`))
   assertPointInRoom(receiver, room, 'receiver')
   const frequencyHz = [...(options.frequenciesHz ?? linearFrequencyGrid(20, 300, 0.5))]
-  const maxModeHz = options.maxModeHz ?? 2 * Math.max(...frequencyHz)
+  const maxModeHz = options.maxModeHz ?? 2 * frequencyHz.reduce((high, f) => Math.max(high, f), -Infinity)
   const bandwidthAt = (f: number) => modalBandwidthHz(typeof reverberationTimeS === 'number' ? reverberationTimeS : reverberationTimeS(f))
   const terms = roomModes(room, { speedOfSoundMps, maxHz: maxModeHz }).map((mode) => ({
     weight: (sources.reduce((sum, s) => sum + modePressureShape(mode.indices, room, s), 0) * modePressureShape(mode.indices, room, receiver)) / modeShapeMeanSquare(mode.indices),
