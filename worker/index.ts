@@ -44,7 +44,7 @@ async function shutdown(signal: string) {
   await worker.close().catch((error: unknown) => logger.warn({ err: error }, 'worker close failed'))
   store.close()
   connection.disconnect()
-  await Promise.allSettled([sequelize.close()])
+  await sequelize.close().catch((error: unknown) => logger.warn({ err: error }, 'database close failed'))
   process.exit(0)
 }
 process.on('unhandledRejection', (reason) => {
